@@ -1,0 +1,93 @@
+/**
+ * npm run bench — speed figures for the calculation core and the command-line entry point.
+ *   analyse / solve in process: cases per second, median and p95 per case [ms]
+ *   calc CLI wall time for 10,000 analyses and 1,000 thickness solves, process start included [s]
+ *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
+ * `--json` prints one JSON object of named figures instead of the table.
+ */
+import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { performance } from 'node:perf_hooks';
+import { runCase } from '../shared/calc';
+import { makeCases } from './bench-cases';
+
+const root = path.resolve(__dirname, '..');
+const asJson = process.argv.includes('--json');
+
+function percentile(sorted: number[], p: number): number {
+  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[i];
+}
+
+function timeEach(kind: 'analyse' | 'solve', count: number, seed: number) {
+  const cases = makeCases(kind, count, seed);
+  const times: number[] = [];
+  let errors = 0;
+  const t0 = performance.now();
+  for (const c of cases) {
+    const s = performance.now();
+    const r = runCase(c);
+    times.push(performance.now() - s);
+    if ('error' in r) errors++;
+  }
+  const total = (performance.now() - t0) / 1000;
+  times.sort((a, b) => a - b);
+  return {
+    cases: count,
+    errors,
+    casesPerSecond: Math.round(count / total),
+    medianMs: Number(percentile(times, 50).toFixed(4)),
+    p95Ms: Number(percentile(times, 95).toFixed(4)),
+  };
+}
+
+function cliWall(kind: 'analyse' | 'solve', count: number, seed: number) {
+  const input = JSON.stringify(makeCases(kind, count, seed));
+  const t0 = performance.now();
+  const r = spawnSync('npm', ['run', '--silent', 'calc'], { cwd: root, input, maxBuffer: 1 << 28 });
+  const wallS = (performance.now() - t0) / 1000;
+  let items = -1;
+  try {
+    items = (JSON.parse(r.stdout.toString()) as unknown[]).length;
+  } catch {
+    items = -1;
+  }
+  return { cases: count, wallSeconds: Number(wallS.toFixed(3)), exitCode: r.status, itemsOut: items };
+}
+
+function firstPaint(): { firstPaintMs: number | null; firstContentfulPaintMs: number | null; note?: string } {
+  const script = path.join(root, 'scripts', 'bench-quick-sizing.ts');
+  if (!existsSync(path.join(root, 'dist')) || !existsSync('/usr/bin/chromium') || !existsSync(script)) {
+    return { firstPaintMs: null, firstContentfulPaintMs: null, note: 'skipped: needs dist/ (npm run build:web) and /usr/bin/chromium' };
+  }
+  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [script, '--json'], { cwd: root, env: process.env, timeout: 120_000 });
+  try {
+    const lines = r.stdout.toString().trim().split('\n');
+    return JSON.parse(lines[lines.length - 1]);
+  } catch {
+    return { firstPaintMs: null, firstContentfulPaintMs: null, note: `failed: ${r.stderr.toString().slice(0, 300)}` };
+  }
+}
+
+const figures = {
+  analyse: timeEach('analyse', 5000, 1),
+  solve: timeEach('solve', 500, 2),
+  cliAnalyse10000: cliWall('analyse', 10_000, 3),
+  cliSolve1000: cliWall('solve', 1000, 4),
+  quickSizingPaint: process.argv.includes('--no-browser') ? null : firstPaint(),
+};
+
+if (asJson) {
+  process.stdout.write(JSON.stringify(figures) + '\n');
+} else {
+  const a = figures.analyse;
+  const s = figures.solve;
+  console.log('Lagline benchmark (seeded cases spanning the domain; nothing cached between cases)');
+  console.log(`analyse  ${a.casesPerSecond} cases/s   median ${a.medianMs} ms   p95 ${a.p95Ms} ms   (${a.cases} cases, ${a.errors} errors)`);
+  console.log(`solve    ${s.casesPerSecond} cases/s   median ${s.medianMs} ms   p95 ${s.p95Ms} ms   (${s.cases} cases, ${s.errors} errors)`);
+  console.log(`calc CLI 10,000 analyses: ${figures.cliAnalyse10000.wallSeconds} s wall (target ≤ 2.5 s)`);
+  console.log(`calc CLI 1,000 solves:    ${figures.cliSolve1000.wallSeconds} s wall (target ≤ 2.5 s)`);
+  const p = figures.quickSizingPaint;
+  if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
+}

@@ -1,0 +1,24 @@
+#!/usr/bin/env bash
+# Installs what a fresh machine lacks: Debian packages (MariaDB, and Chromium for browser tests)
+# and the npm dependencies from the committed lockfile. Safe to run again; it skips what is there.
+# Usage: scripts/setup.sh [--with-browser]
+set -euo pipefail
+cd "$(dirname "$0")/.."
+
+need=()
+[ -x /usr/sbin/mariadbd ] || need+=(mariadb-server)
+if [ "${1:-}" = "--with-browser" ] && [ ! -x /usr/bin/chromium ]; then need+=(chromium); fi
+if [ ${#need[@]} -gt 0 ]; then
+  echo "Installing from Debian's packages: ${need[*]}"
+  apt-get update -qq >/dev/null
+  # One apt-get call: parallel calls would clash on the dpkg lock.
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "${need[@]}" >/dev/null
+fi
+
+stamp=node_modules/.lagline-lock.sha256
+want=$(sha256sum package-lock.json | cut -d' ' -f1)
+if [ ! -f "$stamp" ] || [ "$(cat "$stamp")" != "$want" ]; then
+  echo "Installing npm dependencies from package-lock.json…"
+  npm ci --no-audit --no-fund --loglevel=error
+  echo "$want" > "$stamp"
+fi

@@ -1,0 +1,3 @@
+export * from './colors';
+export * from './spacing';
+export * from './typography';
