@@ -1,0 +1,5 @@
+import { SettingsScreen } from '../../src/components/settings';
+
+export default function SettingsRoute() {
+  return <SettingsScreen />;
+}

@@ -1,0 +1,5 @@
+import { SitesScreen } from '../../src/components/sites';
+
+export default function SitesRoute() {
+  return <SitesScreen />;
+}

@@ -1,0 +1,5 @@
+import { TeamScreen } from '../../src/components/team';
+
+export default function TeamRoute() {
+  return <TeamScreen />;
+}

@@ -1,0 +1,5 @@
+import { ForgotPasswordForm } from '../../src/components/auth';
+
+export default function ForgotPasswordRoute() {
+  return <ForgotPasswordForm />;
+}

@@ -1,0 +1,73 @@
+import express, { type Express, type Router } from 'express';
+import { registerAuthRoutes } from './auth/auth.routes';
+import { createCalcPool, type CalcPool } from './calculations/calc-pool';
+import { registerCalculationRoutes } from './calculations/calculations.routes';
+import type { Config } from './config';
+import type { Db } from './db/db';
+import type { Deps } from './deps';
+import { registerDevMailRoutes } from './dev/dev-mail.routes';
+import { errorHandler, errors } from './errors';
+import { registerHealthRoutes } from './health/health.routes';
+import { csrfProtection } from './http/csrf';
+import { createLimiters } from './http/rate-limits';
+import { requestId } from './http/request-id';
+import { securityHeaders } from './http/security';
+import { loadSessionCaller, sessionMiddleware } from './http/session';
+import { inlineScriptHashes, mountWebApp } from './http/web-app';
+import { registerInvitationRoutes } from './invitations/invitations.routes';
+import { createLogger, type Logger } from './logger';
+import type { Mailer } from './mail/mailer';
+import { registerMeRoutes } from './me/me.routes';
+import { registerSiteRoutes } from './sites/sites.routes';
+import { registerTeamRoutes } from './team/team.routes';
+
+export type AppOptions = { db: Db; mailer: Mailer; config: Config; logger?: Logger; calc?: CalcPool };
+
+export type LaglineApp = Express & {
+  locals: { apiRouter: Router; calc: CalcPool };
+};
+
+const CALCULATIONS = '/v1/calculations';
+
+/** Builds the whole HTTP application. Never listens (server/index.ts and tests do). */
+export function createApp({ db, mailer, config, logger = createLogger(config.logLevel), calc }: AppOptions): LaglineApp {
+  const app = express() as LaglineApp;
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+  app.set('query parser', 'simple');
+
+  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: calc ?? createCalcPool(config) };
+
+  app.use(requestId);
+  app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls: config.appUrl.startsWith('https:') }));
+
+  // Batches of cases may be large; everything else stays small.
+  const bigJson = express.json({ limit: '12mb' });
+  const smallJson = express.json({ limit: '100kb' });
+  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? bigJson : smallJson)(req, res, next));
+
+  // Calculations are stateless: no session, no CSRF token.
+  const session = sessionMiddleware(db, config);
+  const caller = loadSessionCaller(deps);
+  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? next() : session(req, res, next)));
+  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? next() : caller(req, res, next)));
+  app.use('/api', csrfProtection({ appOrigin: new URL(config.appUrl).origin, exempt: (req) => req.path === CALCULATIONS }));
+
+  const api = express.Router();
+  registerHealthRoutes(api, deps);
+  registerAuthRoutes(api, deps);
+  registerInvitationRoutes(api, deps);
+  registerTeamRoutes(api, deps);
+  registerMeRoutes(api, deps);
+  registerSiteRoutes(api, deps);
+  registerDevMailRoutes(api, deps);
+  registerCalculationRoutes(api, deps);
+  app.use(api);
+  app.use('/api', (_req, _res, next) => next(errors.notFound('The API route')));
+  app.locals.apiRouter = api;
+  app.locals.calc = deps.calc;
+
+  mountWebApp(app, config.distDir);
+  app.use(errorHandler(logger));
+  return app;
+}

@@ -1,0 +1,61 @@
+import type { Router } from 'express';
+import { passwordResetConfirmSchema, passwordResetRequestSchema, signInSchema, signUpSchema } from '../../shared/schemas/auth';
+import type { Deps } from '../deps';
+import { ensureCsrfToken } from '../http/csrf';
+import { publicRoute, route } from '../http/routes';
+import { endSession, startSignedInSession } from '../http/session';
+import { validateBody } from '../http/validate';
+import * as auth from './auth.service';
+
+export function registerAuthRoutes(router: Router, deps: Deps): void {
+  route(router, 'get', '/api/v1/auth/session', publicRoute(), async (req, res) => {
+    const token = ensureCsrfToken(req);
+    res.set('Cache-Control', 'no-store').json(await auth.sessionPayload(deps, req.auth, token));
+  });
+
+  route(router, 'post', '/api/v1/auth/signup', publicRoute(), deps.limiters.signin, validateBody(signUpSchema), async (req, res) => {
+    const { userId, teamId } = await auth.signUp(deps, req.body, req.ip);
+    const token = await startSignedInSession(req, userId, teamId);
+    const caller = await auth.loadCaller(deps, userId, teamId);
+    res.status(201).json(await auth.sessionPayload(deps, caller ?? undefined, token));
+  });
+
+  route(router, 'post', '/api/v1/auth/signin', publicRoute(), deps.limiters.signin, validateBody(signInSchema), async (req, res) => {
+    const { userId, teamId } = await auth.signIn(deps, req.body, req.ip);
+    const token = await startSignedInSession(req, userId, teamId);
+    const caller = await auth.loadCaller(deps, userId, teamId);
+    res.json(await auth.sessionPayload(deps, caller ?? undefined, token));
+  });
+
+  route(router, 'post', '/api/v1/auth/signout', publicRoute(), async (req, res) => {
+    await endSession(req);
+    res.clearCookie('lagline.sid', { path: '/', httpOnly: true, sameSite: 'lax' });
+    res.status(204).end();
+  });
+
+  route(
+    router,
+    'post',
+    '/api/v1/auth/password-reset',
+    publicRoute(),
+    deps.limiters.passwordReset,
+    validateBody(passwordResetRequestSchema),
+    async (req, res) => {
+      await auth.requestPasswordReset(deps, req.body.email, req.ip);
+      res.status(202).json({ message: 'If the address has an account, a reset link is on its way.' });
+    },
+  );
+
+  route(
+    router,
+    'post',
+    '/api/v1/auth/password-reset/confirm',
+    publicRoute(),
+    deps.limiters.passwordResetConfirm,
+    validateBody(passwordResetConfirmSchema),
+    async (req, res) => {
+      await auth.confirmPasswordReset(deps, req.body.token, req.body.password, req.ip);
+      res.status(204).end();
+    },
+  );
+}

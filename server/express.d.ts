@@ -1,0 +1,21 @@
+import 'express-serve-static-core';
+import 'express-session';
+import type { Role } from '../shared/schemas/common';
+
+declare module 'express-session' {
+  interface SessionData {
+    csrfToken: string;
+    userId: number;
+    teamId: number;
+    /** Sign-in time [ms since epoch]; the absolute timeout counts from here. */
+    signedInAt: number;
+  }
+}
+
+declare module 'express-serve-static-core' {
+  interface Request {
+    id: string;
+    /** Set by the session loader when the caller is signed in and still a member of the team. */
+    auth?: { userId: number; teamId: number; role: Role; email: string; name: string };
+  }
+}

@@ -1,0 +1,96 @@
+import type { DesignBases, SiteCreateInput, SitePatchInput } from '../../shared/schemas/sites';
+import { can } from '../../shared/schemas/permissions';
+import { insertAudit } from '../audit/audit.repository';
+import type { Caller } from '../auth/auth.service';
+import { type Db, inTransaction } from '../db/db';
+import { errors } from '../errors';
+import { findMember } from '../team/teams.repository';
+import * as repo from './sites.repository';
+
+/** Defaults a new site starts from (SI, °C); every value is editable. */
+export const DEFAULT_DESIGN_BASES: DesignBases = {
+  touch: { airTemperatureC: 35, windSpeedMS: 0, surfaceEmissivity: 0.9, contactSeconds: 5 },
+  energy: { airTemperatureC: 10, windSpeedMS: 3, operatingHoursPerYear: 8000, heatSourceEfficiency: 0.85 },
+  condensation: { airTemperatureC: 30, relativeHumidityPct: 80, marginK: 1 },
+};
+
+/** Contractors see only the sites they were invited to. */
+const visibleTo = (caller: Caller) => (caller.role === 'contractor' ? caller.userId : undefined);
+
+export const listSites = (deps: { db: Db }, caller: Caller) => repo.listSites(deps.db, caller.teamId, visibleTo(caller));
+
+export async function getSite(deps: { db: Db }, caller: Caller, id: number) {
+  const site = await repo.findSite(deps.db, caller.teamId, id, visibleTo(caller));
+  if (!site) throw errors.notFound('The site');
+  const members = can(caller.role, 'site.members') ? await repo.listSiteMembers(deps.db, id) : undefined;
+  return { ...site, ...(members ? { members } : {}) };
+}
+
+export async function createSite(deps: { db: Db }, caller: Caller, input: SiteCreateInput, ip?: string) {
+  return inTransaction(deps.db, async (trx) => {
+    if (await repo.siteNameTaken(trx, caller.teamId, input.name)) throw errors.conflict('NAME_TAKEN', 'The team already has a site with this name.', 'name');
+    const id = await repo.insertSite(trx, {
+      teamId: caller.teamId,
+      name: input.name,
+      description: input.description ?? '',
+      designBases: { ...DEFAULT_DESIGN_BASES, ...(input.designBases ?? {}) },
+      createdBy: caller.userId,
+    });
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.created', targetType: 'site', targetId: id, ip });
+    return (await repo.findSite(trx, caller.teamId, id))!;
+  });
+}
+
+/**
+ * Edits a site. A role with only 'site.editTouchBasis' (safety officers) may change the touch-safety
+ * basis and nothing else.
+ */
+export async function updateSite(deps: { db: Db }, caller: Caller, id: number, patch: SitePatchInput, ip?: string) {
+  if (!can(caller.role, 'site.edit')) {
+    const onlyTouch =
+      patch.name === undefined &&
+      patch.description === undefined &&
+      patch.designBases !== undefined &&
+      Object.keys(patch.designBases).every((k) => k === 'touch');
+    if (!onlyTouch) throw errors.forbidden('Your role may change the touch-safety basis only.');
+  }
+  return inTransaction(deps.db, async (trx) => {
+    const site = await repo.findSite(trx, caller.teamId, id, visibleTo(caller));
+    if (!site) throw errors.notFound('The site');
+    if (patch.name !== undefined && (await repo.siteNameTaken(trx, caller.teamId, patch.name, id))) {
+      throw errors.conflict('NAME_TAKEN', 'The team already has a site with this name.', 'name');
+    }
+    await repo.updateSite(trx, caller.teamId, id, {
+      name: patch.name,
+      description: patch.description,
+      designBases: patch.designBases ? { ...site.designBases, ...patch.designBases } : undefined,
+    });
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.updated', targetType: 'site', targetId: id, details: { fields: Object.keys(patch) }, ip });
+    return (await repo.findSite(trx, caller.teamId, id))!;
+  });
+}
+
+export async function deleteSite(deps: { db: Db }, caller: Caller, id: number, ip?: string): Promise<void> {
+  await inTransaction(deps.db, async (trx) => {
+    const n = await repo.deleteSite(trx, caller.teamId, id);
+    if (!n) throw errors.notFound('The site');
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.deleted', targetType: 'site', targetId: id, ip });
+  });
+}
+
+export async function addSiteMember(deps: { db: Db }, caller: Caller, siteId: number, userId: number, ip?: string) {
+  const site = await repo.findSite(deps.db, caller.teamId, siteId);
+  if (!site) throw errors.notFound('The site');
+  if (!(await findMember(deps.db, caller.teamId, userId))) throw errors.badRequest('VALIDATION_FAILED', 'This person is not a member of the team.', 'userId');
+  await repo.addSiteMember(deps.db, siteId, userId, caller.userId);
+  await insertAudit(deps.db, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_added', targetType: 'site', targetId: siteId, details: { userId }, ip });
+  return repo.listSiteMembers(deps.db, siteId);
+}
+
+export async function removeSiteMember(deps: { db: Db }, caller: Caller, siteId: number, userId: number, ip?: string): Promise<void> {
+  const site = await repo.findSite(deps.db, caller.teamId, siteId);
+  if (!site) throw errors.notFound('The site');
+  const n = await repo.removeSiteMember(deps.db, siteId, userId);
+  if (!n) throw errors.notFound('The site member');
+  await insertAudit(deps.db, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_removed', targetType: 'site', targetId: siteId, details: { userId }, ip });
+}

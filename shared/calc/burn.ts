@@ -1,0 +1,258 @@
+/**
+ * Contact-burn thresholds of hot surfaces by surface material and contact time.
+ *
+ * @remarks
+ * Two bases, as the trade uses them:
+ * - ISO 13732-1:2006, burn thresholds for contact of unprotected skin with a hot solid surface whose temperature
+ *   is maintained during contact, for five surface-material groups and contact periods from 0.5 s upward.
+ *   The standard gives *bands* (spreads); this module takes the **lower bound** of each band (the conservative
+ *   edge). Between the tabulated contact periods it interpolates linearly in log10(time): that interpolation
+ *   is **our assumption**, not the standard's. Below 1 s the 1 s value is kept (conservative, as thresholds
+ *   fall with time); from 8 h on the 8 h value applies, as the standard states for long contact.
+ * - ASTM C1055, the 5 s contact basis usual for industrial personnel protection, used when no contact time
+ *   is given. For metal surfaces it gives ≈ 60 °C; for the other material groups this module uses the
+ *   ISO 13732-1 lower bound interpolated at 5 s.
+ *
+ * Provenance of every number is stated beside it. The ISO values at 1 min, 10 min and 8 h are from the
+ * standard's tables and those at 1 s and 10 s are read from its figures — all **as recalled from memory**;
+ * check them against the standard before relying on an edge case.
+ *
+ * References:
+ * 1. ISO 13732-1:2006, *Ergonomics of the thermal environment — Methods for the assessment of human responses to
+ *    contact with surfaces — Part 1: Hot surfaces*, clause 4.2 (burn thresholds), Figures 1–5 and Tables 1–2.
+ * 2. ASTM C1055-20, *Standard Guide for Heated System Surface Conditions that Produce Contact Burn Injuries*.
+ */
+
+import { CalcInputError } from './errors';
+import type { BurnResult, Contact, ContactMaterial } from './types';
+
+/** Contact material groups of ISO 13732-1, in the order the standard presents them. */
+export const CONTACT_MATERIALS: readonly ContactMaterial[] = [
+  'uncoatedMetal',
+  'coatedMetal',
+  'ceramicGlassStone',
+  'plastic',
+  'wood',
+] as const;
+
+/** One tabulated burn-threshold point with its provenance. */
+export type BurnThresholdPoint = {
+  /** Contact period [s]. */
+  seconds: number;
+  /** Lower bound of the burn-threshold band [°C]. */
+  thresholdC: number;
+  /** Where the number comes from. */
+  provenance: string;
+};
+
+const FIG = 'ISO 13732-1:2006, figure for contact periods 0.5 s to 10 s, lower bound of the band (read from the figure, from memory)';
+const T1 = 'ISO 13732-1:2006, table of burn thresholds for 1 min contact (from memory)';
+const T10 = 'ISO 13732-1:2006, burn threshold for 10 min contact, all materials (from memory)';
+const T8H = 'ISO 13732-1:2006, burn threshold for 8 h and longer, all materials (from memory)';
+const COATED =
+  'coated metal taken equal to the uncoated-metal lower bound for short contact: conservative, since the coated-metal ' +
+  'band of ISO 13732-1:2006 (thin lacquer) starts at or slightly above it (from memory)';
+
+const MINUTE = 60;
+const TEN_MINUTES = 600;
+const EIGHT_HOURS = 8 * 3600;
+
+/**
+ * ISO 13732-1:2006 burn-threshold lower bounds by material and contact period, ascending in time.
+ * All values from memory of the standard — see the provenance of each point.
+ */
+export const ISO_13732_1_BURN_THRESHOLDS: Readonly<Record<ContactMaterial, readonly BurnThresholdPoint[]>> = {
+  uncoatedMetal: [
+    { seconds: 1, thresholdC: 65, provenance: FIG },
+    { seconds: 10, thresholdC: 55, provenance: FIG },
+    { seconds: MINUTE, thresholdC: 51, provenance: T1 },
+    { seconds: TEN_MINUTES, thresholdC: 48, provenance: T10 },
+    { seconds: EIGHT_HOURS, thresholdC: 43, provenance: T8H },
+  ],
+  coatedMetal: [
+    { seconds: 1, thresholdC: 65, provenance: COATED },
+    { seconds: 10, thresholdC: 55, provenance: COATED },
+    { seconds: MINUTE, thresholdC: 51, provenance: T1 },
+    { seconds: TEN_MINUTES, thresholdC: 48, provenance: T10 },
+    { seconds: EIGHT_HOURS, thresholdC: 43, provenance: T8H },
+  ],
+  ceramicGlassStone: [
+    { seconds: 1, thresholdC: 80, provenance: FIG },
+    { seconds: 10, thresholdC: 66, provenance: FIG },
+    { seconds: MINUTE, thresholdC: 56, provenance: T1 },
+    { seconds: TEN_MINUTES, thresholdC: 48, provenance: T10 },
+    { seconds: EIGHT_HOURS, thresholdC: 43, provenance: T8H },
+  ],
+  plastic: [
+    { seconds: 1, thresholdC: 85, provenance: FIG },
+    { seconds: 10, thresholdC: 70, provenance: FIG },
+    { seconds: MINUTE, thresholdC: 60, provenance: T1 },
+    { seconds: TEN_MINUTES, thresholdC: 48, provenance: T10 },
+    { seconds: EIGHT_HOURS, thresholdC: 43, provenance: T8H },
+  ],
+  wood: [
+    { seconds: 1, thresholdC: 110, provenance: FIG },
+    { seconds: 10, thresholdC: 89, provenance: FIG },
+    { seconds: MINUTE, thresholdC: 60, provenance: T1 },
+    { seconds: TEN_MINUTES, thresholdC: 48, provenance: T10 },
+    { seconds: EIGHT_HOURS, thresholdC: 43, provenance: T8H },
+  ],
+};
+
+/** Contact period of the ASTM C1055 industrial basis [s]. */
+export const ASTM_C1055_CONTACT_SECONDS = 5;
+
+/**
+ * ASTM C1055 surface-temperature limit for a 5 s contact with a metallic surface [°C] (≈ 140 °F).
+ * From memory of ASTM C1055 (the 60 °C / 140 °F metal criterion widely used for personnel protection).
+ */
+export const ASTM_C1055_METAL_5S_LIMIT_C = 60;
+
+const ISO_SOURCE =
+  'ISO 13732-1:2006 burn threshold, lower bound of the band for the surface material; values between tabulated ' +
+  'contact periods interpolated linearly in log(time) (our assumption, not part of the standard); thresholds as recalled ' +
+  'from the tables and figures of the standard (from memory)';
+
+/** A burn threshold with the basis it was taken from. */
+export type BurnThreshold = {
+  /** Surface temperature at and above which a burn may occur [°C]. */
+  thresholdC: number;
+  /** Contact period the threshold applies to [s]. */
+  seconds: number;
+  /** Basis, with the interpolation assumption when one was made. */
+  source: string;
+};
+
+/** Contact as the public edge may receive it: the contact time may be omitted (ASTM C1055 basis). */
+export type ContactInput = { material: ContactMaterial; seconds?: number };
+
+function isMetal(material: ContactMaterial): boolean {
+  return material === 'uncoatedMetal' || material === 'coatedMetal';
+}
+
+function checkMaterial(material: unknown, field: string): asserts material is ContactMaterial {
+  if (typeof material !== 'string' || !(CONTACT_MATERIALS as readonly string[]).includes(material)) {
+    throw new CalcInputError(field, `${field} must be one of ${CONTACT_MATERIALS.join(', ')}`);
+  }
+}
+
+/**
+ * ISO 13732-1 burn-threshold lower bound for a material and contact period, interpolated in log(time).
+ *
+ * θ(t) = θ_i + (θ_{i+1} − θ_i) · (log t − log t_i) / (log t_{i+1} − log t_i) between tabulated t_i ≤ t ≤ t_{i+1}.
+ *
+ * @param material - surface material group
+ * @param seconds - contact period [s], > 0
+ * @returns threshold [°C] with its basis
+ * @remarks Below 1 s the 1 s value is returned (conservative); from 8 h on, the 8 h value (43 °C). The
+ *   log-time interpolation is our assumption. The standard applies to surfaces whose temperature is held during
+ *   contact and to contact of less than about 10 % of the skin.
+ * @example burnThresholdIso13732('uncoatedMetal', 60).thresholdC // 51 (ISO 13732-1:2006, 1 min, uncoated metal)
+ * References: 1. ISO 13732-1:2006, clause 4.2.
+ */
+export function burnThresholdIso13732(material: ContactMaterial, seconds: number): BurnThreshold {
+  checkMaterial(material, 'contact.material');
+  if (typeof seconds !== 'number' || !Number.isFinite(seconds) || seconds <= 0) {
+    throw new CalcInputError('contact.seconds', 'contact.seconds must be a positive number of seconds');
+  }
+  const points = ISO_13732_1_BURN_THRESHOLDS[material];
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (seconds <= first.seconds) {
+    return { thresholdC: first.thresholdC, seconds, source: `${ISO_SOURCE}; contact below ${first.seconds} s takes the ${first.seconds} s value` };
+  }
+  if (seconds >= last.seconds) {
+    return { thresholdC: last.thresholdC, seconds, source: ISO_SOURCE };
+  }
+  for (let i = 0; i < points.length - 1; i += 1) {
+    const a = points[i];
+    const b = points[i + 1];
+    if (seconds <= b.seconds) {
+      const fraction = (Math.log10(seconds) - Math.log10(a.seconds)) / (Math.log10(b.seconds) - Math.log10(a.seconds));
+      return { thresholdC: a.thresholdC + (b.thresholdC - a.thresholdC) * fraction, seconds, source: ISO_SOURCE };
+    }
+  }
+  // Unreachable: the bracket search above covers first.seconds < seconds < last.seconds.
+  return { thresholdC: last.thresholdC, seconds, source: ISO_SOURCE };
+}
+
+/**
+ * Burn threshold for a surface material, with the ASTM C1055 5 s industrial basis when no time is given.
+ *
+ * @param material - surface material group
+ * @param seconds - contact period [s]; omitted → ASTM C1055 basis (5 s)
+ * @returns threshold [°C]
+ * @remarks With `seconds` omitted: metals 60 °C (ASTM C1055, 5 s); other materials the ISO 13732-1 lower bound at
+ *   5 s (log-time interpolation, our assumption). With `seconds` given: ISO 13732-1 as {@link burnThresholdIso13732}.
+ * @example burnThresholdC('uncoatedMetal') // 60 (ASTM C1055, 5 s contact, metal)
+ * References: 1. ISO 13732-1:2006. 2. ASTM C1055-20.
+ */
+export function burnThresholdC(material: ContactMaterial, seconds?: number): number {
+  return burnThresholdWithSource(material, seconds).thresholdC;
+}
+
+/**
+ * Burn threshold with its basis (see {@link burnThresholdC}).
+ *
+ * @param material - surface material group
+ * @param seconds - contact period [s]; omitted → ASTM C1055 5 s basis
+ * @returns threshold [°C], contact period [s] and the source text
+ * @example burnThresholdWithSource('plastic', 60).thresholdC // 60 (ISO 13732-1:2006, 1 min, plastics)
+ * References: 1. ISO 13732-1:2006. 2. ASTM C1055-20.
+ */
+export function burnThresholdWithSource(material: ContactMaterial, seconds?: number): BurnThreshold {
+  checkMaterial(material, 'contact.material');
+  if (seconds === undefined || seconds === null) {
+    if (isMetal(material)) {
+      return {
+        thresholdC: ASTM_C1055_METAL_5S_LIMIT_C,
+        seconds: ASTM_C1055_CONTACT_SECONDS,
+        source: 'ASTM C1055, 5 s industrial contact basis, metallic surface ≈ 60 °C (140 °F) (from memory)',
+      };
+    }
+    const iso = burnThresholdIso13732(material, ASTM_C1055_CONTACT_SECONDS);
+    return {
+      ...iso,
+      source: `ASTM C1055 5 s industrial contact basis; non-metallic surface evaluated with ${iso.source}`,
+    };
+  }
+  return burnThresholdIso13732(material, seconds);
+}
+
+/**
+ * Compares a surface temperature with the burn threshold for the expected contact: verdict `aboveThreshold`
+ * when T_surface ≥ θ_threshold (a burn may occur at the threshold itself), else `belowThreshold`.
+ *
+ * @param surfaceTemperatureC - surface temperature [°C]
+ * @param contact - surface material and contact period [s] (period omitted → ASTM C1055 5 s basis)
+ * @returns `{ thresholdC, verdict, source }`
+ * @remarks Applies to hot surfaces only; for cold surfaces see {@link COLD_CONTACT_NOTE}. The check is a screen,
+ *   not a risk assessment: ISO 13732-1 also weighs who may touch the surface and how likely contact is.
+ * @example burnCheck(56.5, { material: 'uncoatedMetal', seconds: 5 }).verdict // 'belowThreshold' (58 °C threshold)
+ * References: 1. ISO 13732-1:2006. 2. ASTM C1055-20.
+ */
+export function burnCheck(surfaceTemperatureC: number, contact: Contact | ContactInput): BurnResult {
+  if (typeof surfaceTemperatureC !== 'number' || !Number.isFinite(surfaceTemperatureC)) {
+    throw new CalcInputError('surfaceTemperatureC', 'surfaceTemperatureC must be a finite number');
+  }
+  if (contact === null || typeof contact !== 'object') {
+    throw new CalcInputError('contact', 'contact must be an object with material and seconds');
+  }
+  const threshold = burnThresholdWithSource(contact.material, contact.seconds);
+  return {
+    thresholdC: threshold.thresholdC,
+    verdict: surfaceTemperatureC >= threshold.thresholdC ? 'aboveThreshold' : 'belowThreshold',
+    source: threshold.source,
+  };
+}
+
+/**
+ * Note shown beside cold surfaces: ISO 13732-1 covers hot surfaces only. Cold contact is the subject of
+ * ISO 13732-3:2005 (cold surfaces), whose thresholds (numbness, frostbite) are not evaluated here; as recalled
+ * from memory, frostbite risk for touching bare metal begins near 0 °C for longer contact and about −15 °C for
+ * short contact.
+ */
+export const COLD_CONTACT_NOTE =
+  'Cold surfaces are assessed under ISO 13732-3 (cold surfaces), not by this hot-surface check; as recalled ' +
+  '(from memory), frostbite risk when gripping bare metal begins near 0 °C for prolonged contact and about −15 °C ' +
+  'for short contact.';

@@ -1,0 +1,55 @@
+/**
+ * The never-throwing public edge: untrusted JSON in, a result or an error item out.
+ */
+
+import { analyse } from './analyse';
+import { CalcInputError, ImpossibleTargetError } from './errors';
+import type { CalcErrorItem, CalcOutcome } from './types';
+
+function errorItem(e: unknown, prefix: string): CalcErrorItem {
+  if (e instanceof CalcInputError || e instanceof ImpossibleTargetError) {
+    const field = e.field === '(case)' ? prefix.replace(/\.$/, '') || '(case)' : `${prefix}${e.field}`;
+    return { error: { code: e.code, field, message: e.message } };
+  }
+  return {
+    error: {
+      code: 'CALCULATION_FAILED',
+      field: prefix.replace(/\.$/, ''),
+      message: 'The calculation failed for this case; please report it with the input.',
+    },
+  };
+}
+
+/**
+ * Validates and analyses one untrusted case.
+ *
+ * @param input - parsed JSON of one case
+ * @returns a result, or `{ error: { code, field, message } }`; never throws
+ * @remarks Codes: INVALID_INPUT, REQUIRED, OUT_OF_RANGE, UNKNOWN_FIELD, CONDUCTIVITY_NOT_POSITIVE,
+ * TARGET_NOT_REACHABLE, SERIES_TOO_THIN, CALCULATION_FAILED.
+ */
+export function runCase(input: unknown): CalcOutcome {
+  try {
+    return analyse(input as never);
+  } catch (e) {
+    return errorItem(e, '');
+  }
+}
+
+/**
+ * Validates and analyses many cases, in order; field paths are prefixed with the item index (`[12].layers[0]`).
+ *
+ * @param inputs - parsed JSON array of cases
+ * @returns one outcome per case; never throws
+ */
+export function runCases(inputs: unknown[]): CalcOutcome[] {
+  const out = new Array<CalcOutcome>(inputs.length);
+  for (let i = 0; i < inputs.length; i++) {
+    try {
+      out[i] = analyse(inputs[i] as never);
+    } catch (e) {
+      out[i] = errorItem(e, `[${i}].`);
+    }
+  }
+  return out;
+}

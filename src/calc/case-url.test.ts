@@ -1,0 +1,67 @@
+import type { CalcCase } from '../../shared/calc/types';
+
+import { caseToParam, decodeCaseParams, decodeCaseQuery, encodeCaseQuery } from './case-url';
+import { defaultDraft, draftFromCase, draftOptions, draftToCase } from './quick-case';
+
+const example: CalcCase = {
+  geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
+  processTemperatureC: 250,
+  layers: [{ thicknessM: 0.05, conductivity: [0.035, 0.00015], maxServiceTemperatureC: 650 }],
+  surfaceEmissivity: 0.1,
+  ambient: { airTemperatureC: 30, radiantTemperatureC: 30, windSpeedMS: 0, relativeHumidityPct: 60 },
+  solveFor: { criterion: 'surfaceTemperature', maxC: 60 },
+  round: { seriesM: [0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
+};
+
+describe('shared links', () => {
+  it('when a case is encoded and decoded, then the same SI case comes back', () => {
+    const decoded = decodeCaseQuery(`?${encodeCaseQuery(example, { mode: 'size' })}`);
+    expect(decoded).toEqual({ kind: 'ok', case: example, options: { mode: 'size' } });
+  });
+
+  it('when a case is encoded, then the JSON is compact and free of float noise', () => {
+    const c = { ...example, processTemperatureC: 0.1 + 0.2 };
+    const p = caseToParam(c);
+    expect(p).not.toMatch(/\s/);
+    expect(p).toContain('"processTemperatureC":0.3');
+  });
+
+  it('when there is no case parameter, then nothing is decoded', () => {
+    expect(decodeCaseQuery('?foo=1')).toEqual({ kind: 'none' });
+  });
+
+  it('when the case is not JSON, then the reader is told', () => {
+    expect(decodeCaseParams('{oops')).toEqual({ kind: 'invalid', message: expect.stringContaining('not valid JSON') });
+  });
+
+  it('when a field has the wrong type, then the message names the field', () => {
+    const bad = JSON.stringify({ ...example, processTemperatureC: 'hot' });
+    const r = decodeCaseParams(bad);
+    expect(r.kind).toBe('invalid');
+    expect(r.kind === 'invalid' && r.message).toContain('processTemperatureC');
+  });
+
+  it('when the geometry type is unknown, then the message names it', () => {
+    const bad = JSON.stringify({ ...example, geometry: { type: 'cone' } });
+    const r = decodeCaseParams(bad);
+    expect(r.kind === 'invalid' && r.message).toContain('geometry.type');
+  });
+
+  it('when every geometry and purpose goes draft → case → link → draft → case, then the case is unchanged', () => {
+    for (const kind of ['pipe', 'vessel', 'wall'] as const) {
+      for (const purpose of ['personnel', 'conservation', 'condensation', 'holding', 'frost'] as const) {
+        for (const mode of ['size', 'check'] as const) {
+          const d = { ...defaultDraft(), kind, purpose, mode };
+          const c = draftToCase(d);
+          const decoded = decodeCaseQuery(encodeCaseQuery(c, draftOptions(d)));
+          if (decoded.kind !== 'ok') throw new Error('decode failed');
+          const again = draftFromCase(decoded.case, decoded.options);
+          expect(draftToCase(again)).toEqual(c);
+          expect(again.purpose).toBe(purpose);
+          expect(again.mode).toBe(mode);
+          expect(again.kind).toBe(kind);
+        }
+      }
+    }
+  });
+});

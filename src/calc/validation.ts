@@ -1,0 +1,127 @@
+/**
+ * Field-by-field validation of the quick-sizing draft with yup. Messages name the field (and layer) and
+ * state bounds in the units on screen.
+ */
+import * as yup from 'yup';
+
+import { fixed } from './format';
+import { limitKey, purposeAvailable, type Draft } from './quick-case';
+import { type Quantity, type UnitSystem, unitOf } from './units';
+
+export type FieldErrors = Record<string, string>;
+
+type Rule = { label: string; quantity: Quantity; min?: number; max?: number; exclusiveMin?: boolean; optional?: boolean };
+
+function show(quantity: Quantity, system: UnitSystem, si: number): string {
+  const u = unitOf(quantity, system);
+  const v = u.fromSI(si);
+  const decimals = Math.abs(v) >= 100 || Number.isInteger(Math.round(v * 1000) / 1000) ? 0 : Math.abs(v) < 0.1 ? 3 : 1;
+  return `${fixed(v, decimals)}${u.suffix ? ` ${u.suffix}` : ''}`;
+}
+
+function numberRule(r: Rule, system: UnitSystem) {
+  let s = yup.number().typeError(`Enter ${r.label} as a number.`);
+  s = r.optional ? s.nullable() : s.nullable().test('present', `Enter ${r.label} as a number.`, (v) => v !== null && v !== undefined);
+  if (r.min !== undefined) {
+    const min = r.min;
+    s = r.exclusiveMin
+      ? s.test('min', `${cap(r.label)} must be more than ${show(r.quantity, system, min)}.`, (v) => v === null || v === undefined || v > min)
+      : s.test('min', `${cap(r.label)} must be at least ${show(r.quantity, system, min)}.`, (v) => v === null || v === undefined || v >= min);
+  }
+  if (r.max !== undefined) {
+    const max = r.max;
+    s = s.test('max', `${cap(r.label)} must be at most ${show(r.quantity, system, max)}.`, (v) => v === null || v === undefined || v <= max);
+  }
+  return s;
+}
+
+const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/** The rules that apply to this draft (geometry and purpose decide which fields matter). */
+export function rulesFor(d: Draft): Record<string, Rule> {
+  const rules: Record<string, Rule> = {
+    processTemperatureC: { label: 'the process temperature', quantity: 'temperature', min: -273, max: 1200 },
+    emissivity: { label: 'the emissivity', quantity: 'ratio', min: 0.02, max: 1 },
+    airTemperatureC: { label: 'the air temperature', quantity: 'temperature', min: -60, max: 80 },
+    radiantTemperatureC: { label: 'the surroundings temperature', quantity: 'temperature', min: -100, max: 200 },
+    windSpeedMS: { label: 'the wind speed', quantity: 'speed', min: 0, max: 40 },
+    relativeHumidityPct: { label: 'the relative humidity', quantity: 'percent', min: 0, max: 100, optional: d.purpose !== 'condensation' },
+    contactSeconds: { label: 'the contact time', quantity: 'seconds', min: 1, max: 28800 },
+  };
+  if (d.kind === 'pipe') {
+    rules.pipeOuterDiameterM = { label: 'the pipe outside diameter', quantity: 'diameter', min: 0.005, max: 3 };
+    if (d.pipeOrientation === 'vertical') rules.pipeHeightM = { label: 'the vertical run height', quantity: 'length', min: 0.1, max: 200 };
+  } else if (d.kind === 'vessel') {
+    rules.vesselDiameterM = { label: 'the vessel diameter', quantity: 'length', min: 0.1, max: 50 };
+    rules.vesselLengthM = { label: 'the shell length', quantity: 'length', min: 0, max: 100 };
+  } else if (d.wallOrientation === 'vertical') {
+    rules.wallHeightM = { label: 'the wall height', quantity: 'length', min: 0.05, max: 100 };
+  } else {
+    rules.wallCharacteristicLengthM = { label: 'the area ÷ perimeter', quantity: 'length', min: 0.01, max: 50 };
+  }
+  d.layers.forEach((l, i) => {
+    const n = `layer ${i + 1}`;
+    const solved = d.mode === 'size' && i === d.layers.length - 1 && purposeAvailable(d.purpose, d.kind);
+    if (!solved) rules[`layers[${i}].thicknessM`] = { label: `the thickness of ${n}`, quantity: 'thickness', min: 0.001, max: 1 };
+    if (l.materialId === 'custom') {
+      l.conductivity.forEach((_, j) => {
+        rules[`layers[${i}].conductivity[${j}]`] = j === 0
+          ? { label: `k at 0 °C for ${n}`, quantity: 'ratio', min: 0.001, max: 5 }
+          : { label: `coefficient c${j} for ${n}`, quantity: 'ratio' };
+      });
+      rules[`layers[${i}].maxServiceTemperatureC`] = { label: `the maximum service temperature of ${n}`, quantity: 'temperature', optional: true, min: -273, max: 1500 };
+    }
+  });
+  const lk = limitKey(d) as string;
+  const limitRules: Record<string, Rule> = {
+    maxSurfaceC: { label: 'the maximum surface temperature', quantity: 'temperature', min: -50, max: 400 },
+    maxHeatLossWPerM: { label: 'the maximum heat loss', quantity: 'heatLossPerLength', min: 0, exclusiveMin: true, max: 1e5 },
+    maxHeatFluxWPerM2: { label: 'the maximum heat loss', quantity: 'heatFlux', min: 0, exclusiveMin: true, max: 1e5 },
+    maxHeatLossW: { label: 'the maximum heat loss', quantity: 'heatFlow', min: 0, exclusiveMin: true, max: 1e8 },
+    condensationMarginK: { label: 'the margin above the dew point', quantity: 'temperatureDelta', min: 0, max: 20 },
+    maxChangeK: { label: 'the maximum temperature drop', quantity: 'temperatureDelta', min: 0, exclusiveMin: true, max: 500 },
+    minHours: { label: 'the minimum time before freezing', quantity: 'hours', min: 0, exclusiveMin: true, max: 1000 },
+  };
+  if (purposeAvailable(d.purpose, d.kind)) rules[lk] = limitRules[lk];
+  if (d.kind === 'pipe' && d.purpose === 'holding') {
+    rules.runLengthM = { label: 'the run length', quantity: 'length', min: 0, exclusiveMin: true, max: 1e5 };
+    rules.massFlowKgPerS = { label: 'the mass flow', quantity: 'massFlow', min: 0, exclusiveMin: true, max: 1e4 };
+    rules.specificHeatJPerKgK = { label: 'the specific heat', quantity: 'specificHeat', min: 100, max: 20000 };
+  }
+  if (d.kind === 'pipe' && d.purpose === 'frost') {
+    rules.innerDiameterM = { label: 'the pipe inside diameter', quantity: 'diameter', min: 0.002, max: 3 };
+    rules.pipeMassKgPerM = { label: 'the pipe mass per metre', quantity: 'massPerLength', min: 0, max: 2000 };
+  }
+  const e = 'energy.';
+  rules[`${e}operatingHoursPerYear`] = { label: 'the operating hours', quantity: 'hours', min: 0, max: 8784 };
+  rules[`${e}pricePerKWh`] = { label: 'the energy price', quantity: 'pricePerEnergy', min: 0, max: 100 };
+  rules[`${e}efficiency`] = { label: 'the heat-source efficiency', quantity: 'fraction', min: 0.01, max: 1 };
+  rules[`${e}co2KgPerKWh`] = { label: 'the CO₂ factor', quantity: 'co2Factor', min: 0, max: 5 };
+  return rules;
+}
+
+function read(d: Draft, path: string): unknown {
+  return path
+    .replace(/\[(\d+)\]/g, '.$1')
+    .split('.')
+    .reduce<unknown>((o, k) => (o === null || o === undefined ? undefined : (o as Record<string, unknown>)[k]), d);
+}
+
+/** Every field error of the draft, keyed by field path; an empty object when the draft is complete. */
+export function validateDraft(d: Draft, system: UnitSystem): FieldErrors {
+  const errors: FieldErrors = {};
+  const rules = rulesFor(d);
+  for (const [path, rule] of Object.entries(rules)) {
+    try {
+      numberRule(rule, system).validateSync(read(d, path));
+    } catch (e) {
+      if (e instanceof yup.ValidationError) errors[path] = e.message;
+      else throw e;
+    }
+  }
+  if (d.kind === 'pipe' && d.purpose === 'frost' && d.innerDiameterM !== null && d.pipeOuterDiameterM !== null && d.innerDiameterM >= d.pipeOuterDiameterM) {
+    errors.innerDiameterM = 'The pipe inside diameter must be less than its outside diameter.';
+  }
+  if (d.layers.length === 0 && d.mode === 'size') errors.layers = 'Add a layer to size.';
+  return errors;
+}

@@ -1,0 +1,2 @@
+export * from './line-chart';
+export * from './scale';

@@ -1,0 +1,3 @@
+export * from './form-text-field';
+export * from './server-errors';
+export * from './validate';

@@ -1,0 +1,142 @@
+import { Link, usePathname } from 'expo-router';
+import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+
+import { breakpoints, colors, radius, spacing } from '../../theme';
+import { Icon, Text } from '../ui';
+
+import { destinations, isActive } from './destinations';
+
+export const BOTTOM_BAR_HEIGHT = 64;
+
+export interface AppShellProps {
+  teamName?: string;
+  userName?: string;
+  children: React.ReactNode;
+}
+
+/**
+ * The signed-in frame: a bottom bar on phones, a side rail from the wide breakpoint on.
+ * Both are plain links in a landmark, so Tab and Enter reach every destination.
+ */
+export function AppShell({ teamName, userName, children }: AppShellProps) {
+  const { width } = useWindowDimensions();
+  const wide = width >= breakpoints.wide;
+  const pathname = usePathname();
+  const insets = useSafeAreaInsets();
+
+  if (wide) {
+    return (
+      <View style={styles.wideRoot}>
+        <View role="navigation" aria-label="Main" style={[styles.rail, { paddingTop: insets.top + spacing.xl }]}>
+          <View style={styles.railBrand}>
+            <View style={styles.mark} aria-hidden>
+              <View style={styles.markBand} />
+            </View>
+            <View style={styles.railBrandText}>
+              <Text variant="title" weight="bold">
+                Lagline
+              </Text>
+              {teamName ? (
+                <Text variant="caption" tone="textMuted" numberOfLines={1}>
+                  {teamName}
+                </Text>
+              ) : null}
+            </View>
+          </View>
+          <View style={styles.railItems}>
+            {destinations.map((d) => {
+              const active = isActive(pathname, d.href);
+              return (
+                <Link key={d.href} href={d.href} asChild>
+                  <Pressable
+                    role="link"
+                    aria-current={active ? 'page' : undefined}
+                    style={(state) => [styles.railItem, active && styles.railItemActive, (state as { hovered?: boolean }).hovered && !active && styles.hover]}
+                  >
+                    <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+                    <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>
+                      {d.label}
+                    </Text>
+                  </Pressable>
+                </Link>
+              );
+            })}
+          </View>
+          {userName ? (
+            <Text variant="caption" tone="textMuted" style={styles.railUser} numberOfLines={1}>
+              {`Signed in as ${userName}`}
+            </Text>
+          ) : null}
+        </View>
+        <View style={styles.wideContent}>{children}</View>
+      </View>
+    );
+  }
+
+  return (
+    <View style={styles.phoneRoot}>
+      <View style={styles.phoneContent}>{children}</View>
+      <View role="navigation" aria-label="Main" style={[styles.bar, { paddingBottom: insets.bottom }]}>
+        {destinations.map((d) => {
+          const active = isActive(pathname, d.href);
+          return (
+            <Link key={d.href} href={d.href} asChild>
+              <Pressable role="link" aria-current={active ? 'page' : undefined} style={styles.barItem}>
+                <View style={[styles.barPill, active && styles.barPillActive]}>
+                  <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+                </View>
+                <Text variant="caption" weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'} numberOfLines={1}>
+                  {d.label}
+                </Text>
+              </Pressable>
+            </Link>
+          );
+        })}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.background },
+  rail: {
+    width: 232,
+    borderRightWidth: 1,
+    borderRightColor: colors.border,
+    backgroundColor: colors.surfaceSunk,
+    paddingHorizontal: spacing.md,
+    gap: spacing.xl,
+  },
+  railBrand: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, paddingHorizontal: spacing.sm },
+  railBrandText: { flexShrink: 1 },
+  mark: { width: 32, height: 32, borderRadius: 8, backgroundColor: colors.text, justifyContent: 'center', paddingHorizontal: 5 },
+  markBand: { height: 7, borderRadius: 2, backgroundColor: colors.heatLine },
+  railItems: { gap: spacing.xxs },
+  railItem: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    minHeight: 44,
+    paddingHorizontal: spacing.md,
+    borderRadius: radius.md,
+    borderLeftWidth: 3,
+    borderLeftColor: 'transparent',
+  },
+  railItemActive: { backgroundColor: colors.surface, borderLeftColor: colors.heat },
+  hover: { backgroundColor: colors.surface },
+  railUser: { marginTop: 'auto', paddingHorizontal: spacing.sm, paddingBottom: spacing.xl },
+  wideContent: { flex: 1 },
+  phoneRoot: { flex: 1, backgroundColor: colors.background },
+  phoneContent: { flex: 1 },
+  bar: {
+    flexDirection: 'row',
+    borderTopWidth: 1,
+    borderTopColor: colors.border,
+    backgroundColor: colors.surface,
+    minHeight: BOTTOM_BAR_HEIGHT,
+  },
+  barItem: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: spacing.xxs, paddingVertical: spacing.xs, minHeight: BOTTOM_BAR_HEIGHT },
+  barPill: { paddingHorizontal: spacing.md, paddingVertical: spacing.xxs, borderRadius: radius.pill },
+  barPillActive: { backgroundColor: colors.heatSoft },
+});

@@ -1,0 +1,2 @@
+export * from './app-shell';
+export * from './destinations';

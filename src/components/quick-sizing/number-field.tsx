@@ -1,0 +1,71 @@
+import { useEffect, useRef, useState } from 'react';
+
+import { type Quantity, type UnitSystem, formatInputNumber, parseNumber, unitOf } from '../../calc/units';
+import { TextField } from '../ui';
+
+export interface NumberFieldProps {
+  label: string;
+  quantity: Quantity;
+  system: UnitSystem;
+  /** SI value (the source of truth), or null when the field does not hold a number. */
+  value: number | null;
+  onChange: (si: number | null) => void;
+  error?: string | null;
+  hint?: string;
+  /** Prefix to the unit suffix, e.g. a currency symbol. */
+  unitPrefix?: string;
+  testID?: string;
+  disabled?: boolean;
+}
+
+const same = (a: number | null, b: number | null) =>
+  a === b || (a !== null && b !== null && Math.abs(a - b) <= 1e-12 * Math.max(1, Math.abs(a), Math.abs(b)));
+
+/**
+ * A number input bound to an SI value. It keeps the raw text as typed (so "0." or "-" survive), parses
+ * on change, and redraws the text from SI only when the value changes from outside or the unit system
+ * switches — so toggling units never drifts.
+ */
+export function NumberField({ label, quantity, system, value, onChange, error, hint, unitPrefix, testID, disabled }: NumberFieldProps) {
+  const unit = unitOf(quantity, system);
+  const show = (si: number | null) => (si === null ? '' : formatInputNumber(unit.fromSI(si)));
+  const [text, setText] = useState(() => show(value));
+  const last = useRef<{ si: number | null; system: UnitSystem }>({ si: value, system });
+  const [notNumber, setNotNumber] = useState(false);
+
+  useEffect(() => {
+    const prev = last.current;
+    if (prev.system !== system || !same(prev.si, value)) {
+      // A unit switch or an outside change: show the SI value in this system. A field that holds
+      // text that is not a number keeps it, so the person can finish correcting it.
+      if (value !== null || prev.system === system) setText(show(value));
+      last.current = { si: value, system };
+      if (value !== null) setNotNumber(false);
+    }
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [value, system]);
+
+  const suffix = `${unitPrefix ?? ''}${unit.suffix}`;
+  return (
+    <TextField
+      label={label}
+      value={text}
+      unit={suffix || undefined}
+      unitSpoken={unit.spoken ? `${unitPrefix ? `${unitPrefix} ` : ''}${unit.spoken}` : undefined}
+      inputMode="decimal"
+      keyboardType="numbers-and-punctuation"
+      hint={hint}
+      editable={!disabled}
+      error={notNumber ? `Enter ${label.toLowerCase()} as a number.` : error}
+      testID={testID}
+      onChangeText={(t) => {
+        setText(t);
+        const n = parseNumber(t);
+        const si = n === null ? null : unit.toSI(n);
+        setNotNumber(t.trim() !== '' && n === null);
+        last.current = { si, system };
+        onChange(si);
+      }}
+    />
+  );
+}

@@ -1,0 +1,2 @@
+export * from './create-site-form';
+export * from './sites-screen';

@@ -1,0 +1,83 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { useSession } from '../../api/session';
+import { useSites } from '../../api/sites';
+import type { Role } from '../../api/types';
+import { colors, radius, spacing } from '../../theme';
+import { formatDate } from '../common/format';
+import { Loading, QueryError } from '../common/query-state';
+import { Button, EmptyState, Icon, Screen, Text } from '../ui';
+
+import { CreateSiteForm } from './create-site-form';
+
+const CAN_CREATE: readonly Role[] = ['owner', 'engineer'];
+
+export function SitesScreen({ bottomInset = 0 }: { bottomInset?: number }) {
+  const session = useSession();
+  const sites = useSites();
+  const [creating, setCreating] = useState(false);
+  const canCreate = CAN_CREATE.includes(session.data?.role as Role);
+
+  return (
+    <Screen title="Sites" intro="Plant areas and projects, each with its line list and design bases." bottomInset={bottomInset}>
+      {creating ? <CreateSiteForm onDone={() => setCreating(false)} /> : null}
+      {sites.isPending ? (
+        <Loading label="Loading sites…" />
+      ) : sites.isError ? (
+        <QueryError error={sites.error} onRetry={() => void sites.refetch()} title="Could not load sites" />
+      ) : sites.data.length === 0 ? (
+        creating ? null : (
+          <EmptyState
+            icon="sites"
+            title="No sites yet"
+            message="A site is a plant area or project. It holds the line list of pipes and vessels, and the design bases for touch safety, energy and condensation that sizing works from."
+            actionLabel={canCreate ? 'Create a site' : undefined}
+            onAction={canCreate ? () => setCreating(true) : undefined}
+            note={canCreate ? undefined : 'An owner or engineer on your team can create the first site.'}
+            testID="sites-empty"
+          />
+        )
+      ) : (
+        <View style={styles.listWrap}>
+          {canCreate && !creating ? <Button label="Create a site" icon="plus" variant="secondary" onPress={() => setCreating(true)} /> : null}
+          <View role="list" style={styles.list} testID="sites-list">
+            {sites.data.map((site) => (
+              <View key={String(site.id)} role="listitem" style={styles.row}>
+                <Icon name="sites" tone="heat" />
+                <View style={styles.rowText}>
+                  <Text weight="semibold">{site.name}</Text>
+                  {site.description ? (
+                    <Text variant="caption" tone="textMuted" numberOfLines={2}>
+                      {site.description}
+                    </Text>
+                  ) : null}
+                </View>
+                {site.createdAt ? (
+                  <Text variant="caption" tone="textMuted">
+                    {formatDate(site.createdAt)}
+                  </Text>
+                ) : null}
+              </View>
+            ))}
+          </View>
+        </View>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  listWrap: { gap: spacing.md },
+  list: { borderWidth: 1, borderColor: colors.border, borderRadius: radius.lg, backgroundColor: colors.surface, overflow: 'hidden' },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.md,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.md,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.border,
+  },
+  rowText: { flex: 1, gap: spacing.xxs },
+});

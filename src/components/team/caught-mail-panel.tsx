@@ -1,0 +1,46 @@
+import { StyleSheet, View } from 'react-native';
+
+import { ApiProblemError } from '../../api/client';
+import { useDevMail } from '../../api/team';
+import { colors, radius, spacing } from '../../theme';
+import { formatDateTime } from '../common/format';
+import { Loading, QueryError } from '../common/query-state';
+import { Button, Card, Text } from '../ui';
+
+/**
+ * Development only: the messages the local mail catcher received, so invitations and reset links can
+ * be followed without a real inbox. Hidden when the server has no catcher (it answers 404).
+ */
+export function CaughtMailPanel() {
+  const mail = useDevMail(true);
+  if (mail.isError && mail.error instanceof ApiProblemError && ['not-found', 'forbidden'].includes(mail.error.problem.kind)) return null;
+  return (
+    <Card title="Caught mail" subtitle="Development only: e-mail the local catcher received instead of sending it out." testID="caught-mail">
+      <Button label="Refresh" variant="secondary" onPress={() => void mail.refetch()} busy={mail.isFetching} />
+      {mail.isPending ? (
+        <Loading label="Loading caught mail…" />
+      ) : mail.isError ? (
+        <QueryError error={mail.error} onRetry={() => void mail.refetch()} title="Could not load caught mail" />
+      ) : mail.data.messages.length === 0 ? (
+        <Text tone="textMuted">Nothing caught yet. Invitations and password resets will appear here.</Text>
+      ) : (
+        <View role="list" style={styles.list}>
+          {mail.data.messages.map((m) => (
+            <View key={String(m.id)} role="listitem" style={styles.message}>
+              <Text weight="semibold">{m.subject}</Text>
+              <Text variant="caption" tone="textMuted">{`To ${m.to} · ${formatDateTime(m.receivedAt)}`}</Text>
+              <Text variant="caption" selectable>
+                {m.text}
+              </Text>
+            </View>
+          ))}
+        </View>
+      )}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: spacing.sm },
+  message: { gap: spacing.xxs, padding: spacing.md, borderRadius: radius.md, backgroundColor: colors.surfaceSunk },
+});

@@ -1,0 +1,93 @@
+import { ActivityIndicator, Pressable, StyleSheet, View, type PressableProps, type ViewStyle } from 'react-native';
+
+import { colors, radius, spacing } from '../../theme';
+
+import { Icon, type IconName } from './icon';
+import { Text } from './text';
+
+export type ButtonVariant = 'primary' | 'secondary' | 'quiet' | 'danger';
+
+export interface ButtonProps extends Omit<PressableProps, 'children' | 'style'> {
+  label: string;
+  variant?: ButtonVariant;
+  icon?: IconName;
+  busy?: boolean;
+  /** Stretch to the container's width (phones). */
+  block?: boolean;
+  style?: ViewStyle;
+}
+
+const look: Record<ButtonVariant, { bg: string; fg: 'onAccent' | 'text' | 'heat' | 'fail'; border: string }> = {
+  primary: { bg: colors.heat, fg: 'onAccent', border: colors.heat },
+  secondary: { bg: colors.surface, fg: 'text', border: colors.borderStrong },
+  quiet: { bg: 'transparent', fg: 'heat', border: 'transparent' },
+  danger: { bg: colors.surface, fg: 'fail', border: colors.fail },
+};
+
+/** A button with a visible keyboard focus ring and a busy state that keeps its size. */
+export function Button({ label, variant = 'primary', icon, busy, block, disabled, style, ...rest }: ButtonProps) {
+  const l = look[variant];
+  const inactive = disabled || busy;
+  return (
+    <Pressable
+      role="button"
+      accessibilityRole="button"
+      aria-label={label}
+      aria-busy={busy || undefined}
+      aria-disabled={inactive || undefined}
+      disabled={inactive}
+      {...rest}
+      style={(state) => {
+        const { pressed, hovered, focused } = state as typeof state & { hovered?: boolean; focused?: boolean };
+        return [
+          styles.base,
+          { backgroundColor: l.bg, borderColor: l.border },
+          block && styles.block,
+          variant === 'quiet' && styles.quiet,
+          (pressed || hovered) && !inactive && styles.pressed,
+          focused && styles.focused,
+          inactive && styles.inactive,
+          style,
+        ];
+      }}
+    >
+      <View style={styles.row}>
+        {busy ? (
+          <ActivityIndicator size="small" color={colors[l.fg]} />
+        ) : icon ? (
+          <Icon name={icon} size={18} tone={l.fg} />
+        ) : null}
+        <Text variant="body" weight="semibold" tone={l.fg}>
+          {label}
+        </Text>
+      </View>
+    </Pressable>
+  );
+}
+
+export const focusRing: ViewStyle = {
+  // react-native-web passes outline styles through to CSS.
+  outlineColor: colors.focus,
+  outlineStyle: 'solid',
+  outlineWidth: 3,
+  outlineOffset: 2,
+} as ViewStyle;
+
+const styles = StyleSheet.create({
+  base: {
+    minHeight: 44,
+    paddingHorizontal: spacing.lg,
+    paddingVertical: spacing.sm,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    alignItems: 'center',
+    justifyContent: 'center',
+    alignSelf: 'flex-start',
+  },
+  block: { alignSelf: 'stretch' },
+  quiet: { paddingHorizontal: spacing.sm },
+  row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+  pressed: { opacity: 0.88 },
+  focused: focusRing,
+  inactive: { opacity: 0.55 },
+});

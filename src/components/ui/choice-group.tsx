@@ -1,0 +1,103 @@
+import { Pressable, StyleSheet, View } from 'react-native';
+
+import { colors, radius, spacing } from '../../theme';
+
+import { focusRing } from './button';
+import { Text } from './text';
+
+export interface Choice<T extends string> {
+  value: T;
+  label: string;
+  description?: string;
+}
+
+export interface ChoiceGroupProps<T extends string> {
+  label: string;
+  value: T | null;
+  choices: readonly Choice<T>[];
+  onChange: (value: T) => void;
+  error?: string | null;
+  disabled?: boolean;
+  /** Lay choices out as a wrapping row of chips instead of a list. */
+  compact?: boolean;
+  testID?: string;
+}
+
+/** A radio group: one choice, keyboard operable (Tab to a choice, Enter or Space to pick it). */
+export function ChoiceGroup<T extends string>({ label, value, choices, onChange, error, disabled, compact, testID }: ChoiceGroupProps<T>) {
+  return (
+    <View style={styles.wrap} testID={testID}>
+      <Text variant="label">{label}</Text>
+      <View role="radiogroup" aria-label={label} style={compact ? styles.row : styles.column}>
+        {choices.map((choice) => {
+          const selected = choice.value === value;
+          return (
+            <Pressable
+              key={choice.value}
+              role="radio"
+              aria-checked={selected}
+              aria-label={choice.description ? `${choice.label}. ${choice.description}` : choice.label}
+              disabled={disabled}
+              onPress={() => onChange(choice.value)}
+              style={(state) => [
+                styles.choice,
+                compact && styles.chip,
+                selected && styles.selected,
+                (state as { focused?: boolean }).focused && focusRing,
+                disabled && styles.disabled,
+              ]}
+            >
+              <View style={[styles.dot, selected && styles.dotOn]}>{selected ? <View style={styles.dotInner} /> : null}</View>
+              <View style={styles.texts}>
+                <Text weight={selected ? 'semibold' : 'regular'}>{choice.label}</Text>
+                {choice.description && !compact ? (
+                  <Text variant="caption" tone="textMuted">
+                    {choice.description}
+                  </Text>
+                ) : null}
+              </View>
+            </Pressable>
+          );
+        })}
+      </View>
+      {error ? (
+        <Text variant="caption" weight="semibold" tone="fail" role="alert">
+          {`Error: ${error}`}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.xs },
+  column: { gap: spacing.xs },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
+  choice: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: spacing.sm,
+    minHeight: 44,
+    paddingHorizontal: spacing.md,
+    paddingVertical: spacing.sm,
+    borderWidth: 1,
+    borderColor: colors.borderStrong,
+    borderRadius: radius.md,
+    backgroundColor: colors.surface,
+  },
+  chip: { paddingVertical: spacing.xs },
+  selected: { borderColor: colors.heat, backgroundColor: colors.heatSoft },
+  disabled: { opacity: 0.55 },
+  dot: {
+    width: 18,
+    height: 18,
+    borderRadius: 9,
+    borderWidth: 2,
+    borderColor: colors.textMuted,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
+  dotOn: { borderColor: colors.heat },
+  dotInner: { width: 8, height: 8, borderRadius: 4, backgroundColor: colors.heat },
+  texts: { flexShrink: 1 },
+});

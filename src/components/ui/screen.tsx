@@ -1,0 +1,54 @@
+import { ScrollView, StyleSheet, View, type ViewStyle } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+
+import { breakpoints, colors, spacing } from '../../theme';
+
+import { Text } from './text';
+
+export interface ScreenProps {
+  title?: string;
+  /** One sentence under the title. */
+  intro?: string;
+  /** `narrow` for single forms (sign-in), `wide` for lists and tables. */
+  width?: 'narrow' | 'wide';
+  children?: React.ReactNode;
+  /** Extra space at the bottom, e.g. above a bottom bar. */
+  bottomInset?: number;
+  contentStyle?: ViewStyle;
+  testID?: string;
+}
+
+/** A scrolling page with content capped in width and centred on wide screens. */
+export function Screen({ title, intro, width = 'wide', children, bottomInset = 0, contentStyle, testID }: ScreenProps) {
+  const insets = useSafeAreaInsets();
+  return (
+    <ScrollView
+      style={styles.scroll}
+      contentContainerStyle={[
+        styles.outer,
+        { paddingTop: insets.top + spacing.xl, paddingBottom: insets.bottom + spacing.xxl + bottomInset },
+      ]}
+      keyboardShouldPersistTaps="handled"
+      testID={testID}
+    >
+      <View role="main" style={[styles.content, { maxWidth: width === 'narrow' ? 480 : breakpoints.contentMax }, contentStyle]}>
+        {title ? (
+          <View style={styles.head}>
+            <Text variant="heading" role="heading" aria-level={1}>
+              {title}
+            </Text>
+            {intro ? <Text tone="textMuted">{intro}</Text> : null}
+          </View>
+        ) : null}
+        {children}
+      </View>
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  scroll: { flex: 1, backgroundColor: colors.background },
+  outer: { flexGrow: 1, paddingHorizontal: spacing.lg, alignItems: 'center' },
+  content: { width: '100%', gap: spacing.lg },
+  head: { gap: spacing.xs },
+});

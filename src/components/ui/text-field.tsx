@@ -1,0 +1,142 @@
+import { useId, useState } from 'react';
+import { Pressable, StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+
+import { colors, fonts, fontSizes, radius, spacing, tabularFigures } from '../../theme';
+
+import { focusRing } from './button';
+import { Text } from './text';
+
+export interface TextFieldProps extends Omit<TextInputProps, 'value' | 'onChangeText' | 'style'> {
+  label: string;
+  /** The raw text as typed; numeric fields keep it and parse elsewhere, so "0." survives. */
+  value: string;
+  onChangeText: (text: string) => void;
+  /** Short unit shown as a suffix, e.g. "mm". */
+  unit?: string;
+  /** The unit spelled out for screen readers, e.g. "millimetres"; defaults to `unit`. */
+  unitSpoken?: string;
+  hint?: string;
+  error?: string | null;
+  /** Offers a show/hide switch for passwords. */
+  password?: boolean;
+  testID?: string;
+}
+
+/**
+ * A labelled input. The accessible label includes the unit ("Outer diameter, millimetres"), the unit
+ * also sits as a suffix, and an error is shown under the field and announced with it.
+ */
+export function TextField({
+  label,
+  value,
+  onChangeText,
+  unit,
+  unitSpoken,
+  hint,
+  error,
+  password,
+  testID,
+  onFocus,
+  onBlur,
+  ...rest
+}: TextFieldProps) {
+  const id = useId().replace(/:/g, '');
+  const [focused, setFocused] = useState(false);
+  const [revealed, setRevealed] = useState(false);
+  const spokenLabel = unit ? `${label}, ${unitSpoken ?? unit}` : label;
+  const visibleLabel = unit ? `${label} (${unit})` : label;
+  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(' ') || undefined;
+
+  return (
+    <View style={styles.wrap}>
+      <Text variant="label" nativeID={`${id}-label`} aria-hidden>
+        {visibleLabel}
+      </Text>
+      <View
+        style={[
+          styles.box,
+          error ? styles.boxError : null,
+          focused ? styles.boxFocused : null,
+        ]}
+      >
+        <TextInput
+          {...rest}
+          testID={testID}
+          value={value}
+          onChangeText={onChangeText}
+          aria-label={spokenLabel}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={describedBy}
+          secureTextEntry={password ? !revealed : rest.secureTextEntry}
+          placeholderTextColor={colors.textMuted}
+          onFocus={(e) => {
+            setFocused(true);
+            onFocus?.(e);
+          }}
+          onBlur={(e) => {
+            setFocused(false);
+            onBlur?.(e);
+          }}
+          style={[styles.input, unit ? styles.inputWithUnit : null]}
+        />
+        {unit ? (
+          <Text tone="textMuted" style={styles.unit} aria-hidden>
+            {unit}
+          </Text>
+        ) : null}
+        {password ? (
+          <Pressable
+            role="button"
+            aria-label={revealed ? `Hide ${label.toLowerCase()}` : `Show ${label.toLowerCase()}`}
+            onPress={() => setRevealed((r) => !r)}
+            style={(state) => [styles.reveal, (state as { focused?: boolean }).focused && focusRing]}
+          >
+            <Text variant="caption" weight="semibold" tone="heat">
+              {revealed ? 'Hide' : 'Show'}
+            </Text>
+          </Pressable>
+        ) : null}
+      </View>
+      {hint ? (
+        <Text variant="caption" tone="textMuted" nativeID={`${id}-hint`} id={`${id}-hint`}>
+          {hint}
+        </Text>
+      ) : null}
+      {error ? (
+        <Text variant="caption" weight="semibold" tone="fail" nativeID={`${id}-error`} id={`${id}-error`} role="alert">
+          {`Error: ${error}`}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.xs },
+  box: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    minHeight: 44,
+    borderWidth: 1,
+    borderColor: colors.borderStrong,
+    borderRadius: radius.md,
+    backgroundColor: colors.surface,
+  },
+  boxFocused: { borderColor: colors.focus, ...focusRing, outlineOffset: 0 } as never,
+  boxError: { borderColor: colors.fail, borderWidth: 2 },
+  input: {
+    flex: 1,
+    minWidth: 0,
+    paddingHorizontal: spacing.md,
+    paddingVertical: spacing.sm,
+    fontFamily: fonts.regular,
+    fontSize: fontSizes.body,
+    color: colors.text,
+    // The box draws the focus ring; the browser's own outline would double it.
+    outlineStyle: 'none',
+    ...tabularFigures,
+  } as never,
+  inputWithUnit: { textAlign: 'right' },
+  unit: { paddingRight: spacing.md },
+  reveal: { paddingHorizontal: spacing.md, paddingVertical: spacing.sm, borderRadius: radius.sm },
+});
