@@ -1,8 +1,8 @@
 import type { Config } from 'jest';
 
-const tsJest = {
+const tsJest: Config['transform'] = {
   '^.+\\.tsx?$': ['ts-jest', { isolatedModules: true, diagnostics: false }],
-} as const;
+};
 
 const config: Config = {
   projects: [

@@ -8,7 +8,7 @@ const globalCss = `
 html, body { background-color: ${colors.background}; color: ${colors.text}; }
 body { -webkit-font-smoothing: antialiased; font-variant-numeric: tabular-nums; }
 a:focus-visible, [role="button"]:focus-visible, [role="link"]:focus-visible, [role="radio"]:focus-visible, [tabindex]:focus-visible {
-  outline: 3px solid ${colors.focus} !important; outline-offset: 2px !important; border-radius: 6px;
+  outline: 3px solid ${colors.focus} !important; outline-offset: 2px !important;
 }
 `;
 

@@ -55,8 +55,7 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info(`${signal}: shutting down`);
-    const force = setTimeout(() => process.exit(1), 10_000);
-    force.unref();
+    (setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout).unref();
     server.close(async () => {
       await app.locals.calc.close().catch(() => undefined);
       await catcher?.close().catch(() => undefined);

@@ -42,6 +42,13 @@ export function assertStrongPassword(password: string, userInputs: string[], fie
   if (password.length > LIMITS.passwordMax) {
     throw errors.badRequest('WEAK_PASSWORD', `Password must be at most ${LIMITS.passwordMax} characters.`, field);
   }
+  const lower = password.toLowerCase();
+  for (const input of userInputs) {
+    const local = input.includes('@') ? input.split('@')[0].toLowerCase() : '';
+    if (local.length >= 4 && lower.includes(local)) {
+      throw errors.badRequest('WEAK_PASSWORD', 'Password must not contain your e-mail address.', field);
+    }
+  }
   const inputs = userInputs.flatMap((s) => [s, ...s.split(/[@.\s_-]+/)]).filter((s) => s.length >= 3);
   const result = checker().check(password.slice(0, 100), inputs);
   if (result.score < 3) {

@@ -1,3 +1,4 @@
+import { setMaxListeners } from 'node:events';
 import path from 'node:path';
 import { Piscina } from 'piscina';
 import type { Config } from '../config';
@@ -6,11 +7,22 @@ import { errors } from '../errors';
 export type CalcPool = {
   /** Runs the cases in worker threads, in chunks so other requests interleave; results in order. */
   run: (cases: unknown[]) => Promise<unknown[]>;
+  /** Chunks queued or running now. */
+  pending: () => number;
   close: () => Promise<void>;
 };
 
+/** Error paths from a chunk start at [0]; make them index the whole batch. */
+function renumber(result: unknown, offset: number): unknown {
+  const err = (result as { error?: { field?: unknown } } | null)?.error;
+  if (!offset || !err || typeof err.field !== 'string') return result;
+  const field = err.field.replace(/^\[(\d+)\]/, (_m, i: string) => `[${Number(i) + offset}]`);
+  return { ...(result as object), error: { ...err, field } };
+}
+
 export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.join(__dirname, 'calc.worker-boot.js')): CalcPool {
   let pool: Piscina | undefined;
+  let inFlight = 0;
   const get = () =>
     (pool ??= new Piscina({
       filename: workerFile,
@@ -30,9 +42,18 @@ export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.j
         throw errors.unavailable('BUSY', 'The calculation queue is full; try again in a moment.');
       }
       const abort = new AbortController();
+      setMaxListeners(0, abort.signal);
+      const runOne = async (c: unknown[]) => {
+        inFlight++;
+        try {
+          return (await p.run(c, { signal: abort.signal })) as unknown[];
+        } finally {
+          inFlight--;
+        }
+      };
       try {
-        const parts = await Promise.all(chunks.map((c) => p.run(c, { signal: abort.signal }) as Promise<unknown[]>));
-        return parts.flat();
+        const parts = await Promise.all(chunks.map(runOne));
+        return parts.flatMap((part, k) => part.map((r) => renumber(r, k * size)));
       } catch (e) {
         abort.abort();
         if (e instanceof Error && /queue is at limit/i.test(e.message)) {
@@ -41,6 +62,7 @@ export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.j
         throw e;
       }
     },
+    pending: () => inFlight,
     close: async () => {
       if (pool) await pool.destroy();
       pool = undefined;

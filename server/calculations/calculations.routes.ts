@@ -19,7 +19,11 @@ export function registerCalculationRoutes(router: Router, deps: Deps): void {
       res.json(body.length ? await deps.calc.run(body) : []);
       return;
     }
-    const [result] = await deps.calc.run([body]);
+    const [result] = (await deps.calc.run([body])) as { error?: { field?: string } }[];
+    // A single case's error paths name its fields directly ("layers[0]…", not "[0].layers[0]…").
+    if (result?.error && typeof result.error.field === 'string') {
+      result.error = { ...result.error, field: result.error.field.replace(/^\[0\]\.?/, '') };
+    }
     res.json(result);
   });
 }

@@ -17,6 +17,18 @@ export function sessionMiddleware(db: Db, config: Config): RequestHandler {
   });
   // The store checks for its table at construction; a failure surfaces on first use instead.
   (store as unknown as { ready?: Promise<unknown> }).ready?.catch(() => undefined);
+  // Its methods report errors to the callback AND reject the promise they return, which nobody awaits:
+  // left alone, a database outage would become an unhandled rejection and stop the process.
+  const methods = store as unknown as Record<string, unknown>;
+  for (const name of ['get', 'set', 'destroy', 'touch', 'clear', 'length', 'all']) {
+    const original = methods[name];
+    if (typeof original !== 'function') continue;
+    methods[name] = (...args: unknown[]) => {
+      const result = (original as (...a: unknown[]) => unknown).apply(store, args);
+      if (result && typeof (result as Promise<unknown>).catch === 'function') (result as Promise<unknown>).catch(() => undefined);
+      return result;
+    };
+  }
   return session({
     name: SESSION_COOKIE,
     secret: config.sessionSecret,

@@ -718,5 +718,33 @@ export function analyse(input: CalcCase): CalcResult {
     }
   }
   result.method = [...method];
-  return result;
+  return ordered(result);
+}
+
+/** Key order of a result, as the contract shows it (readable JSON for people and diffs). */
+const RESULT_KEYS: (keyof CalcResult)[] = [
+  'heatLossWPerM',
+  'heatFluxWPerM2',
+  'heatLossW',
+  'surfaceTemperatureC',
+  'interfaceTemperaturesC',
+  'convectionCoefficientWPerM2K',
+  'radiationCoefficientWPerM2K',
+  'thicknessM',
+  'roundedLayersM',
+  'totalThicknessM',
+  'dewPointC',
+  'outletTemperatureC',
+  'runHeatLossW',
+  'hoursToZeroC',
+  'burn',
+  'parts',
+  'method',
+  'warnings',
+];
+
+function ordered(r: CalcResult): CalcResult {
+  const out: Record<string, unknown> = {};
+  for (const k of RESULT_KEYS) if (r[k] !== undefined) out[k] = r[k];
+  return out as CalcResult;
 }

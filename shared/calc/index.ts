@@ -10,3 +10,8 @@ export * from './dew-point';
 export * from './analyse';
 export * from './validate';
 export * from './run-case';
+export * from './units';
+export * from './burn';
+export * from './energy';
+export * from './pipe-sizes';
+export * from './library';

@@ -264,6 +264,16 @@ export function interfaceTemperatures(m: SurfaceModel): { outerFacesC: number[];
  */
 export function checkConductivitySpans(m: SurfaceModel, layerIndex: (i: number) => number): void {
   const { outerFacesC, innerC } = interfaceTemperatures(m);
+  const closure = innerC + m.heatFlow * m.seriesR - m.processC;
+  if (!(Math.abs(closure) < 1e-4 * (1 + Math.abs(m.processC - m.surfaceC)))) {
+    // The balance only closed against a layer that cannot carry the flow: some k(T) ≤ 0 between the process
+    // and the surface. Report the first such layer over that whole span.
+    for (let i = 0; i < outerFacesC.length; i++) {
+      if (m.factor[i] !== 0) {
+        assertConductivityPositive(m.coeffs[i], m.processC, m.surfaceC, `layers[${layerIndex(i)}].conductivity`);
+      }
+    }
+  }
   let Tin = innerC;
   for (let i = 0; i < outerFacesC.length; i++) {
     if (m.factor[i] !== 0) {

@@ -546,7 +546,7 @@ export function thicknessToWholeMillimetres(thicknessM: number, direction: Round
  * @param thicknessM - thickness [m], ≥ 0
  * @param direction - `'nearest'` (default) or `'up'`
  * @returns thickness [in], a multiple of 0.125
- * @example thicknessToEighthInch(0.0524) // 2 (2.063 in → 2)
+ * @example thicknessToEighthInch(0.052) // 2 (2.047 in)
  * References: common practice (US insulation thicknesses quoted in eighths of an inch or coarser).
  */
 export function thicknessToEighthInch(thicknessM: number, direction: RoundingDirection = 'nearest'): number {

@@ -8,9 +8,11 @@ import * as yup from 'yup';
 import type { CalcCase } from '../../shared/calc/types';
 import type { DraftOptions } from './quick-case';
 
-/** Trim float noise (0.1 + 0.2) so links stay short and stable; 12 significant figures is far below any input's precision. */
+/**
+ * Drop undefined members. Numbers are kept exactly (JSON writes the shortest text that reads back to the
+ * same double), so a link reproduces the case bit for bit and library materials are recognised again.
+ */
 function tidy(value: unknown): unknown {
-  if (typeof value === 'number') return Number.isFinite(value) ? Number(value.toPrecision(12)) : value;
   if (Array.isArray(value)) return value.map(tidy);
   if (value && typeof value === 'object') {
     const out: Record<string, unknown> = {};

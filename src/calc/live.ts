@@ -3,7 +3,7 @@
  * the result, the bare-surface comparison, the thickness sweeps for the charts, the temperature profile
  * and the annual energy figures. Pure: no React, no clock.
  */
-import { analyse, runCaseInBrowser as runCase } from './run-case';
+import { analyse, runCase } from './run-case';
 import { conductivityIntegral } from '../../shared/calc/conduction';
 import type { CalcCase, CalcResult, Layer } from '../../shared/calc/types';
 

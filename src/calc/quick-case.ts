@@ -125,7 +125,7 @@ export function defaultEnergy(): EnergyAssumptions {
 
 /** A sensible starting case: NPS 4 steam line at 180 °C, mineral wool, aluminium jacket, still air. */
 export function defaultDraft(): Draft {
-  const mat = materialById('mineral-wool-pipe') ?? { conductivity: [0.04], maxServiceTemperatureC: undefined, id: 'custom' };
+  const mat = materialById('mineral-fibre-pipe-c547-type-i') ?? { conductivity: [0.04], maxServiceTemperatureC: undefined, id: 'custom' };
   const nps4 = pipeSizes.find((p) => p.nps === '4');
   return {
     kind: 'pipe',
@@ -142,8 +142,8 @@ export function defaultDraft(): Draft {
     wallCharacteristicLengthM: 0.5,
     processTemperatureC: 180,
     layers: [{ materialId: mat.id, conductivity: [...mat.conductivity], maxServiceTemperatureC: mat.maxServiceTemperatureC ?? null, thicknessM: 0.05 }],
-    finishId: 'aluminium-weathered',
-    emissivity: finishById('aluminium-weathered')?.emissivity ?? 0.2,
+    finishId: 'aluminium-oxidised',
+    emissivity: finishById('aluminium-oxidised')?.emissivity ?? 0.15,
     airTemperatureC: 25,
     radiantTemperatureC: 25,
     windSpeedMS: 0,
@@ -346,12 +346,18 @@ export function draftFromCase(c: CalcCase, o: DraftOptions = {}): Draft {
     if (g.characteristicLengthM !== undefined) d.wallCharacteristicLengthM = g.characteristicLengthM;
   }
   d.processTemperatureC = c.processTemperatureC;
-  d.layers = c.layers.map((l) => ({
-    materialId: materialMatching(l.conductivity, l.maxServiceTemperatureC)?.id ?? 'custom',
-    conductivity: [...l.conductivity],
+  d.layers = c.layers.map((l) => {
+    const match = materialMatching(l.conductivity, l.maxServiceTemperatureC);
+    const conductivity: Num[] = [...l.conductivity];
+    // A custom material always offers c0, c1 and c2 to edit.
+    while (!match && conductivity.length < 3) conductivity.push(0);
+    return {
+    materialId: match?.id ?? 'custom',
+    conductivity,
     maxServiceTemperatureC: l.maxServiceTemperatureC ?? null,
     thicknessM: l.thicknessM,
-  }));
+    };
+  });
   d.emissivity = c.surfaceEmissivity;
   d.finishId = finishMatching(c.surfaceEmissivity)?.id ?? 'custom';
   d.airTemperatureC = c.ambient.airTemperatureC;

@@ -69,20 +69,6 @@ export type InsulationMaterial = {
 };
 
 /**
- * Evaluates a polynomial k(T) = Σ c_i · T^i by Horner's rule.
- *
- * @param coefficients - c_0, c_1, … [W/(m·K)], [W/(m·K²)], …
- * @param temperatureC - temperature [°C]
- * @returns conductivity [W/(m·K)]
- * @example conductivityAt([0.035, 0.00015], 100) // 0.05
- */
-export function conductivityAt(coefficients: readonly number[], temperatureC: number): number {
-  let k = 0;
-  for (let i = coefficients.length - 1; i >= 0; i -= 1) k = k * temperatureC + coefficients[i];
-  return k;
-}
-
-/**
  * Least-squares polynomial fit of k(T) minimising the *relative* error: min Σ ((p(T_i) − k_i) / k_i)².
  *
  * @param points - table points (at least degree + 1)
@@ -223,7 +209,7 @@ const DEFINITIONS: readonly MaterialDefinition[] = [
     id: 'polyisocyanurate-c591-type-iv',
     name: 'Rigid polyisocyanurate foam pipe insulation',
     specification: 'ASTM C591, Type IV (aged values)',
-    source: `ASTM C591 (e.g. C591-20), table of maximum apparent thermal conductivity (aged), Type IV; ${RECALLED}`,
+    source: `ASTM C591 (e.g. C591-20), table of maximum apparent thermal conductivity (aged), Type IV; ${RECALLED}; fitted with a cubic, as the foam's curve flattens where its cell gas condenses`,
     confidence: 'approximate',
     maxServiceTemperatureC: 149,
     minServiceTemperatureC: -183,

@@ -47,10 +47,10 @@ export const US_ROUNDING: Rounding = {
  */
 export function roundingFromMillimetres(thicknessesMm: readonly number[], maxSingleLayerMm = 100): Rounding {
   if (!Array.isArray(thicknessesMm) || thicknessesMm.length === 0) {
-    throw new CalcInputError('seriesM', 'a thickness series needs at least one thickness');
+    throw new CalcInputError('seriesM', 'seriesM needs at least one thickness');
   }
   for (const t of thicknessesMm) {
-    if (!Number.isFinite(t) || t <= 0) throw new CalcInputError('seriesM', 'every thickness must be a positive number');
+    if (!Number.isFinite(t) || t <= 0) throw new CalcInputError('seriesM', 'every thickness in seriesM must be a positive number');
   }
   if (!Number.isFinite(maxSingleLayerMm) || maxSingleLayerMm <= 0) {
     throw new CalcInputError('maxSingleLayerM', 'maxSingleLayerM must be a positive number');

@@ -52,7 +52,7 @@ export function AppShell({ teamName, userName, children }: AppShellProps) {
                   <Pressable
                     role="link"
                     aria-current={active ? 'page' : undefined}
-                    style={(state) => [styles.railItem, active && styles.railItemActive, (state as { hovered?: boolean }).hovered && !active && styles.hover]}
+                    style={[styles.railItem, active && styles.railItemActive]}
                   >
                     <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
                     <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>
@@ -124,7 +124,6 @@ const styles = StyleSheet.create({
     borderLeftColor: 'transparent',
   },
   railItemActive: { backgroundColor: colors.surface, borderLeftColor: colors.heat },
-  hover: { backgroundColor: colors.surface },
   railUser: { marginTop: 'auto', paddingHorizontal: spacing.sm, paddingBottom: spacing.xl },
   wideContent: { flex: 1 },
   phoneRoot: { flex: 1, backgroundColor: colors.background },

@@ -36,7 +36,7 @@ export function SettingsScreen({ bottomInset = 0 }: { bottomInset?: number }) {
   };
 
   return (
-    <Screen title="Settings" intro="Your own preferences; they follow you to any device." bottomInset={bottomInset}>
+    <Screen width="medium" title="Settings" intro="Your own preferences; they follow you to any device." bottomInset={bottomInset}>
       <Card title="Units" subtitle="How Lagline shows and asks for quantities. Calculations always run in SI.">
         <ChoiceGroup label="Unit system" value={current} choices={unitChoices} onChange={(v) => void choose(v)} disabled={update.isPending} testID="unit-system" />
         {message ? (

@@ -16,7 +16,7 @@ export function InvitationList({ invitations, canManage }: { invitations: Invita
       {error ? <Banner tone="fail" title="Not revoked">{error}</Banner> : null}
       {invitations.length === 0 ? (
         <Text tone="textMuted" testID="invitations-empty">
-          No open invitations. Invite someone with the form on this page.
+          {canManage ? 'No open invitations. Invite someone with the form on this page.' : 'No open invitations. A team owner can invite people.'}
         </Text>
       ) : (
         <View role="list" testID="invitation-list">

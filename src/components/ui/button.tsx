@@ -38,14 +38,15 @@ export function Button({ label, variant = 'primary', icon, busy, block, disabled
       disabled={inactive}
       {...rest}
       style={(state) => {
-        const { pressed, hovered, focused } = state as typeof state & { hovered?: boolean; focused?: boolean };
+        // Keyboard focus is drawn by the global :focus-visible rule (app/+html.tsx), so a click
+        // does not leave a ring behind.
+        const { pressed, hovered } = state as typeof state & { hovered?: boolean };
         return [
           styles.base,
           { backgroundColor: l.bg, borderColor: l.border },
           block && styles.block,
           variant === 'quiet' && styles.quiet,
           (pressed || hovered) && !inactive && styles.pressed,
-          focused && styles.focused,
           inactive && styles.inactive,
           style,
         ];
@@ -88,6 +89,5 @@ const styles = StyleSheet.create({
   quiet: { paddingHorizontal: spacing.sm },
   row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   pressed: { opacity: 0.88 },
-  focused: focusRing,
   inactive: { opacity: 0.55 },
 });

@@ -2,7 +2,6 @@ import { Pressable, StyleSheet, View } from 'react-native';
 
 import { colors, radius, spacing } from '../../theme';
 
-import { focusRing } from './button';
 import { Text } from './text';
 
 export interface Choice<T extends string> {
@@ -39,11 +38,10 @@ export function ChoiceGroup<T extends string>({ label, value, choices, onChange,
               aria-label={choice.description ? `${choice.label}. ${choice.description}` : choice.label}
               disabled={disabled}
               onPress={() => onChange(choice.value)}
-              style={(state) => [
+              style={[
                 styles.choice,
                 compact && styles.chip,
                 selected && styles.selected,
-                (state as { focused?: boolean }).focused && focusRing,
                 disabled && styles.disabled,
               ]}
             >

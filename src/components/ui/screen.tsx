@@ -9,8 +9,8 @@ export interface ScreenProps {
   title?: string;
   /** One sentence under the title. */
   intro?: string;
-  /** `narrow` for single forms (sign-in), `wide` for lists and tables. */
-  width?: 'narrow' | 'wide';
+  /** `narrow` for single forms (sign-in), `medium` for settings-like pages, `wide` for lists and tables. */
+  width?: 'narrow' | 'medium' | 'wide';
   children?: React.ReactNode;
   /** Extra space at the bottom, e.g. above a bottom bar. */
   bottomInset?: number;
@@ -31,7 +31,7 @@ export function Screen({ title, intro, width = 'wide', children, bottomInset = 0
       keyboardShouldPersistTaps="handled"
       testID={testID}
     >
-      <View role="main" style={[styles.content, { maxWidth: width === 'narrow' ? 480 : breakpoints.contentMax }, contentStyle]}>
+      <View role="main" style={[styles.content, { maxWidth: maxWidths[width] }, contentStyle]}>
         {title ? (
           <View style={styles.head}>
             <Text variant="heading" role="heading" aria-level={1}>
@@ -45,6 +45,8 @@ export function Screen({ title, intro, width = 'wide', children, bottomInset = 0
     </ScrollView>
   );
 }
+
+const maxWidths = { narrow: 480, medium: 760, wide: breakpoints.contentMax } as const;
 
 const styles = StyleSheet.create({
   scroll: { flex: 1, backgroundColor: colors.background },

@@ -89,7 +89,7 @@ export function TextField({
             role="button"
             aria-label={revealed ? `Hide ${label.toLowerCase()}` : `Show ${label.toLowerCase()}`}
             onPress={() => setRevealed((r) => !r)}
-            style={(state) => [styles.reveal, (state as { focused?: boolean }).focused && focusRing]}
+            style={styles.reveal}
           >
             <Text variant="caption" weight="semibold" tone="heat">
               {revealed ? 'Hide' : 'Show'}

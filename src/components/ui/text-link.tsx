@@ -1,22 +1,27 @@
 import { Link, type Href } from 'expo-router';
-import { StyleSheet } from 'react-native';
+import { StyleSheet, type TextStyle } from 'react-native';
 
-import { colors, fonts } from '../../theme';
+import { colors, fonts, fontSizes, lineHeights, tabularFigures } from '../../theme';
 
-import { Text, type TextProps } from './text';
+import type { TextVariant } from './text';
 
-export interface TextLinkProps extends Omit<TextProps, 'children'> {
+export interface TextLinkProps {
   href: Href;
   children: string;
+  variant?: TextVariant;
+  style?: TextStyle;
+  testID?: string;
 }
 
 /** An in-app link styled as text, underlined so it does not rely on colour alone. */
-export function TextLink({ href, children, style, variant = 'body', ...rest }: TextLinkProps) {
+export function TextLink({ href, children, variant = 'body', style, testID }: TextLinkProps) {
   return (
-    <Link href={href} asChild>
-      <Text variant={variant} {...rest} role="link" style={[styles.link, style]}>
-        {children}
-      </Text>
+    <Link
+      href={href}
+      testID={testID}
+      style={[styles.link, { fontSize: fontSizes[variant], lineHeight: lineHeights[variant] }, style]}
+    >
+      {children}
     </Link>
   );
 }
@@ -26,5 +31,6 @@ const styles = StyleSheet.create({
     color: colors.heat,
     fontFamily: fonts.semibold,
     textDecorationLine: 'underline',
+    ...tabularFigures,
   },
 });

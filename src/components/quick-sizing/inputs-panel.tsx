@@ -1,0 +1,394 @@
+import { StyleSheet, View } from 'react-native';
+
+import { finishById, finishes, materialById, materials, pipeSizeByOuterDiameter, pipeSizes, thicknessSeries } from '../../calc/library';
+import {
+  CONTACT_MATERIALS,
+  PURPOSES,
+  PURPOSE_TRADE_TERMS,
+  limitKey,
+  purposeAvailable,
+  type Draft,
+  type LayerDraft,
+  type Num,
+} from '../../calc/quick-case';
+import type { FieldErrors } from '../../calc/validation';
+import type { Quantity, UnitSystem } from '../../calc/units';
+import { spacing } from '../../theme';
+import { Button, Card, Text, TextField } from '../ui';
+
+import { CoefficientFields } from './coefficient-fields';
+import { NumberField } from './number-field';
+import { OptionChips } from './option-chips';
+import { SelectField } from './select-field';
+
+export interface InputsPanelProps {
+  draft: Draft;
+  system: UnitSystem;
+  errors: FieldErrors;
+  onChange: (patch: Partial<Draft>) => void;
+}
+
+const MAX_LAYERS = 3;
+
+/** Every input of the quick-sizing case, grouped the way a person thinks about the job. */
+export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelProps) {
+  const num = (key: keyof Draft, label: string, quantity: Quantity, extra?: { hint?: string; testID?: string }) => (
+    <NumberField
+      label={label}
+      quantity={quantity}
+      system={system}
+      value={d[key] as Num}
+      onChange={(v) => onChange({ [key]: v } as Partial<Draft>)}
+      error={errors[key as string]}
+      hint={extra?.hint}
+      testID={extra?.testID ?? `qs-input-${String(key)}`}
+    />
+  );
+
+  const setLayer = (i: number, patch: Partial<LayerDraft>) => onChange({ layers: d.layers.map((l, j) => (j === i ? { ...l, ...patch } : l)) });
+  const solvedIndex = d.mode === 'size' && purposeAvailable(d.purpose, d.kind) ? d.layers.length - 1 : -1;
+
+  return (
+    <View style={styles.col}>
+      <Card title="What you are insulating" testID="qs-section-geometry">
+        <OptionChips
+          label="Shape"
+          value={d.kind}
+          testID="qs-kind"
+          options={[
+            { value: 'pipe', label: 'Pipe' },
+            { value: 'vessel', label: 'Vessel' },
+            { value: 'wall', label: 'Wall or flat surface' },
+          ]}
+          onChange={(kind) => onChange({ kind })}
+        />
+        {d.kind === 'pipe' ? (
+          <>
+            <OptionChips
+              label="Pipe size given as"
+              value={d.pipeSizeBy}
+              testID="qs-size-by"
+              options={[
+                { value: 'nps', label: 'NPS' },
+                { value: 'dn', label: 'DN' },
+                { value: 'od', label: 'Outside diameter' },
+              ]}
+              onChange={(pipeSizeBy) => {
+                const known = d.pipeOuterDiameterM !== null ? pipeSizeByOuterDiameter(d.pipeOuterDiameterM) : undefined;
+                const fallback = pipeSizes.find((p) => p.nps === '4');
+                if (pipeSizeBy !== 'od' && !known && fallback) onChange({ pipeSizeBy, ...sizePatch(fallback.outerDiameterM) });
+                else onChange({ pipeSizeBy });
+              }}
+            />
+            {d.pipeSizeBy === 'od' ? (
+              num('pipeOuterDiameterM', 'Outside diameter', 'diameter')
+            ) : (
+              <SelectField
+                label={d.pipeSizeBy === 'nps' ? 'Nominal pipe size (NPS)' : 'Nominal size (DN)'}
+                testID="qs-input-pipeSize"
+                value={String(pipeSizeByOuterDiameter(d.pipeOuterDiameterM ?? 0)?.outerDiameterM ?? '')}
+                options={pipeSizes.map((p) => ({
+                  value: String(p.outerDiameterM),
+                  label: d.pipeSizeBy === 'nps' ? `NPS ${p.nps}` : `DN ${p.dn}`,
+                  detail: `${system === 'US' ? `${(p.outerDiameterM / 0.0254).toFixed(3)} in` : `${(p.outerDiameterM * 1000).toFixed(1)} mm`} outside (ASME B36.10M)`,
+                }))}
+                onChange={(v) => onChange(sizePatch(Number(v)))}
+              />
+            )}
+            <OptionChips
+              label="Run"
+              value={d.pipeOrientation}
+              testID="qs-pipe-orientation"
+              options={[
+                { value: 'horizontal', label: 'Horizontal' },
+                { value: 'vertical', label: 'Vertical' },
+              ]}
+              onChange={(pipeOrientation) => onChange({ pipeOrientation })}
+            />
+            {d.pipeOrientation === 'vertical' ? num('pipeHeightM', 'Height of the vertical run', 'length') : null}
+          </>
+        ) : null}
+        {d.kind === 'vessel' ? (
+          <>
+            {num('vesselDiameterM', 'Shell outside diameter', 'length')}
+            {num('vesselLengthM', 'Shell length, tangent to tangent', 'length')}
+            <OptionChips
+              label="Axis"
+              value={d.vesselOrientation}
+              testID="qs-vessel-orientation"
+              options={[
+                { value: 'vertical', label: 'Vertical' },
+                { value: 'horizontal', label: 'Horizontal' },
+              ]}
+              onChange={(vesselOrientation) => onChange({ vesselOrientation })}
+            />
+            <OptionChips
+              label="Heads"
+              value={d.headType}
+              testID="qs-head-type"
+              options={[
+                { value: 'ellipsoidal2to1', label: '2:1 ellipsoidal' },
+                { value: 'hemispherical', label: 'Hemispherical' },
+                { value: 'flat', label: 'Flat' },
+              ]}
+              onChange={(headType) => onChange({ headType })}
+            />
+          </>
+        ) : null}
+        {d.kind === 'wall' ? (
+          <>
+            <OptionChips
+              label="The surface faces"
+              value={d.wallOrientation}
+              testID="qs-wall-orientation"
+              options={[
+                { value: 'vertical', label: 'Sideways (a vertical wall)' },
+                { value: 'faceUp', label: 'Up (a roof or top)' },
+                { value: 'faceDown', label: 'Down (an underside)' },
+              ]}
+              onChange={(wallOrientation) => onChange({ wallOrientation })}
+            />
+            {d.wallOrientation === 'vertical'
+              ? num('wallHeightM', 'Wall height', 'length')
+              : num('wallCharacteristicLengthM', 'Area ÷ perimeter', 'length', { hint: 'For a 2 m × 1 m top: 2 ÷ 6 = 0.33 m.' })}
+          </>
+        ) : null}
+        {num('processTemperatureC', 'Process temperature', 'temperature')}
+      </Card>
+
+      <Card title="Insulation and finish" subtitle="Layers from the inside out." testID="qs-section-layers">
+        {d.layers.map((l, i) => {
+          const custom = l.materialId === 'custom';
+          return (
+            <View key={i} style={styles.layer} testID={`qs-layer-${i}`}>
+              <Text variant="label">{`Layer ${i + 1}${i === 0 ? ' (against the surface)' : ''}`}</Text>
+              <SelectField
+                label={`Material, layer ${i + 1}`}
+                testID={`qs-input-layers[${i}].material`}
+                value={l.materialId}
+                options={[
+                  ...materials.map((m) => ({ value: m.id, label: m.name, detail: m.maxServiceTemperatureC !== undefined ? `Service to ${m.maxServiceTemperatureC} °C` : undefined })),
+                  { value: 'custom', label: 'Custom k(T)', detail: 'Enter the conductivity polynomial yourself' },
+                ]}
+                onChange={(id) => {
+                  const m = materialById(id);
+                  if (m) setLayer(i, { materialId: id, conductivity: [...m.conductivity], maxServiceTemperatureC: m.maxServiceTemperatureC ?? null });
+                  else setLayer(i, { materialId: 'custom', conductivity: padTo3(l.conductivity) });
+                }}
+              />
+              {custom ? (
+                <>
+                  <CoefficientFields
+                    layer={i + 1}
+                    system={system}
+                    value={l.conductivity}
+                    onChange={(conductivity) => setLayer(i, { conductivity })}
+                    errors={l.conductivity.map((_, j) => errors[`layers[${i}].conductivity[${j}]`])}
+                    testID={`qs-input-layers[${i}].conductivity`}
+                  />
+                  <NumberField
+                    label={`Maximum service temperature, layer ${i + 1}`}
+                    quantity="temperature"
+                    system={system}
+                    value={l.maxServiceTemperatureC}
+                    onChange={(v) => setLayer(i, { maxServiceTemperatureC: v })}
+                    error={errors[`layers[${i}].maxServiceTemperatureC`]}
+                    hint="Optional: a warning appears when the layer runs hotter."
+                    testID={`qs-input-layers[${i}].maxServiceTemperatureC`}
+                  />
+                </>
+              ) : null}
+              {i === solvedIndex ? (
+                <Text tone="textMuted" testID={`qs-layer-${i}-solved`}>
+                  Thickness: worked out for the purpose below, rounded up to the thickness series.
+                </Text>
+              ) : (
+                <NumberField
+                  label={`Thickness, layer ${i + 1}`}
+                  quantity="thickness"
+                  system={system}
+                  value={l.thicknessM}
+                  onChange={(v) => setLayer(i, { thicknessM: v })}
+                  error={errors[`layers[${i}].thicknessM`]}
+                  testID={`qs-input-layers[${i}].thicknessM`}
+                />
+              )}
+              {d.layers.length > 1 ? (
+                <Button label={`Remove layer ${i + 1}`} variant="quiet" onPress={() => onChange({ layers: d.layers.filter((_, j) => j !== i) })} />
+              ) : null}
+            </View>
+          );
+        })}
+        {d.layers.length < MAX_LAYERS ? (
+          <Button
+            label="Add an outer layer"
+            variant="secondary"
+            icon="plus"
+            testID="qs-add-layer"
+            onPress={() => {
+              const last = d.layers[d.layers.length - 1];
+              onChange({ layers: [...d.layers, { ...(last ?? defaultLayer()), thicknessM: last?.thicknessM ?? 0.05 }] });
+            }}
+          />
+        ) : null}
+        {errors.layers ? <Text tone="fail">{`Error: ${errors.layers}`}</Text> : null}
+        <SelectField
+          label="Outer finish"
+          testID="qs-input-finish"
+          value={d.finishId}
+          options={[
+            ...finishes.map((f) => ({ value: f.id, label: f.name, detail: `Emissivity ${f.emissivity}` })),
+            { value: 'custom', label: 'Custom emissivity' },
+          ]}
+          onChange={(id) => {
+            const f = finishById(id);
+            onChange(f ? { finishId: id, emissivity: f.emissivity } : { finishId: 'custom' });
+          }}
+        />
+        {d.finishId === 'custom' ? num('emissivity', 'Surface emissivity', 'ratio', { hint: 'From 0.02 (polished metal) to 1.' }) : null}
+      </Card>
+
+      <Card title="Surroundings" testID="qs-section-ambient">
+        {num('airTemperatureC', 'Air temperature', 'temperature')}
+        {num('radiantTemperatureC', 'Surroundings temperature (radiant)', 'temperature', { hint: 'Usually the air temperature; lower outdoors under a clear sky.' })}
+        {num('windSpeedMS', 'Wind speed', 'speed', { hint: '0 for still air indoors.' })}
+        {num('relativeHumidityPct', 'Relative humidity', 'percent', { hint: 'Gives the dew point; needed to stay dry.' })}
+      </Card>
+
+      <Card title="What the insulation must do" testID="qs-section-purpose">
+        <OptionChips
+          label="Purpose"
+          value={d.purpose}
+          testID="qs-purpose"
+          options={PURPOSES.map((p) => ({
+            value: p.id,
+            label: p.label,
+            disabled: !purposeAvailable(p.id, d.kind),
+            note: !purposeAvailable(p.id, d.kind) ? 'pipes only' : undefined,
+          }))}
+          onChange={(purpose) => onChange({ purpose })}
+        />
+        <Text tone="textMuted" testID="qs-purpose-hint">
+          {`${PURPOSES.find((p) => p.id === d.purpose)?.hint ?? ''} (${PURPOSE_TRADE_TERMS[d.purpose]})`}
+        </Text>
+        {!purposeAvailable(d.purpose, d.kind) ? (
+          <Text tone="caution" testID="qs-purpose-unavailable">
+            {`Caution: ${PURPOSES.find((p) => p.id === d.purpose)?.label} is worked out for pipes (flow along a run, or water standing in it). For a ${d.kind === 'vessel' ? 'vessel' : 'wall'}, choose another purpose; the build-up below is checked as entered.`}
+          </Text>
+        ) : null}
+        <OptionChips
+          label="Work out"
+          value={d.mode}
+          testID="qs-mode"
+          options={[
+            { value: 'size', label: 'The thickness needed' },
+            { value: 'check', label: 'Whether this build-up is enough' },
+          ]}
+          onChange={(mode) => onChange({ mode })}
+        />
+        {purposeAvailable(d.purpose, d.kind) ? limitField(d, system, errors, onChange) : null}
+        {d.kind === 'pipe' && d.purpose === 'holding' ? (
+          <>
+            {num('runLengthM', 'Length of the run', 'length')}
+            {num('massFlowKgPerS', 'Mass flow', 'massFlow')}
+            {num('specificHeatJPerKgK', 'Specific heat of the fluid', 'specificHeat', { hint: 'Water about 4.19 kJ/(kg·K).' })}
+          </>
+        ) : null}
+        {d.kind === 'pipe' && d.purpose === 'frost' ? (
+          <>
+            {num('innerDiameterM', 'Pipe inside diameter', 'diameter', { hint: 'Set from the standard wall when you pick a size; edit if yours differs.' })}
+            {num('pipeMassKgPerM', 'Pipe mass per length', 'massPerLength')}
+          </>
+        ) : null}
+        <OptionChips
+          label="If someone touches the surface, it is"
+          value={d.contactMaterial}
+          testID="qs-contact"
+          options={CONTACT_MATERIALS.map((c) => ({ value: c.id, label: c.label }))}
+          onChange={(contactMaterial) => onChange({ contactMaterial })}
+        />
+        {num('contactSeconds', 'Contact time', 'seconds', { hint: '5 s is the usual industrial basis; longer contact lowers the burn threshold.' })}
+      </Card>
+
+      <Card title="Energy and money assumptions" subtitle="Defaults shown; change them to match your plant." testID="qs-section-assumptions">
+        <SelectField
+          label="Thickness series"
+          testID="qs-input-series"
+          value={d.energy.seriesId}
+          options={thicknessSeries.map((s) => ({ value: s.id, label: s.name }))}
+          onChange={(seriesId) => onChange({ energy: { ...d.energy, seriesId } })}
+        />
+        <NumberField label="Operating hours per year" quantity="hours" system={system} value={d.energy.operatingHoursPerYear} onChange={(v) => onChange({ energy: { ...d.energy, operatingHoursPerYear: v } })} error={errors['energy.operatingHoursPerYear']} testID="qs-input-energy.operatingHoursPerYear" />
+        <OptionChips
+          label="Currency"
+          value={d.energy.currency}
+          testID="qs-currency"
+          options={[
+            { value: 'USD', label: 'USD $' },
+            { value: 'EUR', label: 'EUR €' },
+            { value: 'GBP', label: 'GBP £' },
+          ]}
+          onChange={(currency) => onChange({ energy: { ...d.energy, currency } })}
+        />
+        <NumberField label="Energy price (fuel as bought)" quantity="pricePerEnergy" unitPrefix={currencySymbol(d.energy.currency)} system={system} value={d.energy.pricePerKWh} onChange={(v) => onChange({ energy: { ...d.energy, pricePerKWh: v } })} error={errors['energy.pricePerKWh']} testID="qs-input-energy.pricePerKWh" />
+        <NumberField label="Heat-source efficiency" quantity="fraction" system={system} value={d.energy.efficiency} onChange={(v) => onChange({ energy: { ...d.energy, efficiency: v } })} error={errors['energy.efficiency']} testID="qs-input-energy.efficiency" />
+        <NumberField label="CO₂ factor of the fuel" quantity="co2Factor" system={system} value={d.energy.co2KgPerKWh} onChange={(v) => onChange({ energy: { ...d.energy, co2KgPerKWh: v } })} error={errors['energy.co2KgPerKWh']} testID="qs-input-energy.co2KgPerKWh" />
+        <TextField label="Basis of the CO₂ factor" value={d.energy.co2Basis} onChangeText={(co2Basis) => onChange({ energy: { ...d.energy, co2Basis } })} testID="qs-input-energy.co2Basis" />
+      </Card>
+    </View>
+  );
+
+  function sizePatch(outerDiameterM: number): Partial<Draft> {
+    const p = pipeSizeByOuterDiameter(outerDiameterM);
+    const patch: Partial<Draft> = { pipeOuterDiameterM: outerDiameterM };
+    if (p?.innerDiameterM) patch.innerDiameterM = p.innerDiameterM;
+    if (p?.massPerMetreKg) patch.pipeMassKgPerM = Number(p.massPerMetreKg.toFixed(2));
+    return patch;
+  }
+}
+
+function limitField(d: Draft, system: UnitSystem, errors: FieldErrors, onChange: (p: Partial<Draft>) => void) {
+  const key = limitKey(d);
+  const spec: Record<string, { label: string; quantity: Quantity; hint?: string }> = {
+    maxSurfaceC: { label: 'Highest surface temperature allowed', quantity: 'temperature', hint: 'Often 55–60 °C for metal jackets within reach; your plant’s specification governs.' },
+    maxHeatLossWPerM: { label: 'Most heat loss allowed per length', quantity: 'heatLossPerLength' },
+    maxHeatFluxWPerM2: { label: 'Most heat loss allowed per area', quantity: 'heatFlux' },
+    maxHeatLossW: { label: 'Most heat loss allowed, whole vessel', quantity: 'heatFlow' },
+    condensationMarginK: { label: 'Margin above the dew point', quantity: 'temperatureDelta' },
+    maxChangeK: { label: 'Largest temperature drop along the run', quantity: 'temperatureDelta' },
+    minHours: { label: 'Hours the standing water must stay above 0 °C', quantity: 'hours' },
+  };
+  const s = spec[key as string];
+  return (
+    <NumberField
+      label={s.label}
+      quantity={s.quantity}
+      system={system}
+      value={d[key] as Num}
+      onChange={(v) => onChange({ [key]: v } as Partial<Draft>)}
+      error={errors[key as string]}
+      hint={s.hint}
+      testID="qs-input-limit"
+    />
+  );
+}
+
+export function currencySymbol(code: string): string {
+  return code === 'EUR' ? '€' : code === 'GBP' ? '£' : code === 'USD' ? '$' : `${code} `;
+}
+
+function padTo3(c: Num[]): Num[] {
+  const out = [...c];
+  while (out.length < 3) out.push(0);
+  return out;
+}
+
+function defaultLayer(): LayerDraft {
+  const m = materials[0];
+  return { materialId: m.id, conductivity: [...m.conductivity], maxServiceTemperatureC: m.maxServiceTemperatureC ?? null, thicknessM: 0.05 };
+}
+
+const styles = StyleSheet.create({
+  col: { gap: spacing.lg },
+  layer: { gap: spacing.sm, paddingBottom: spacing.sm },
+});

@@ -1,0 +1,102 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { LiveOutput } from '../../calc/live';
+import { present } from '../../calc/present';
+import type { Draft } from '../../calc/quick-case';
+import type { UnitSystem } from '../../calc/units';
+import { spacing } from '../../theme';
+import { Banner, Button, Card, Text } from '../ui';
+
+import { ResultValue, VerdictBadge } from './result-value';
+
+export interface ResultsPanelProps {
+  draft: Draft;
+  output: LiveOutput;
+  system: UnitSystem;
+  pending: boolean;
+  signedIn: boolean;
+}
+
+/** The numbers: verdict, headline results large with units, then the details and the year's energy. */
+export function ResultsPanel({ draft, output, system, pending, signedIn }: ResultsPanelProps) {
+  if (output.kind === 'invalid') {
+    const entries = Object.entries(output.errors);
+    return (
+      <Banner tone="fail" title="Some inputs need fixing" testID="qs-invalid">
+        <Text>Results appear as soon as every field holds a usable value:</Text>
+        {entries.map(([field, message]) => (
+          <Text key={field} {...({ dataSet: { field } } as object)}>{`• ${message}`}</Text>
+        ))}
+      </Banner>
+    );
+  }
+  if (output.kind === 'error') {
+    const impossible = output.code === 'TARGET_NOT_REACHABLE';
+    return (
+      <Banner tone="fail" title={impossible ? 'No thickness reaches this target' : 'The calculation refused this case'} testID="qs-calc-error" {...({ dataSet: { code: output.code, field: output.field } } as object)}>
+        <Text>{output.message}</Text>
+        {output.advice.length > 0 ? (
+          <View style={styles.list}>
+            <Text weight="semibold">What would help:</Text>
+            {output.advice.map((a) => (
+              <Text key={a}>{`• ${a}`}</Text>
+            ))}
+          </View>
+        ) : null}
+        {!impossible && output.field ? <Text tone="textMuted">{`Field: ${output.field}`}</Text> : null}
+      </Banner>
+    );
+  }
+  const p = present(draft, output, system);
+  return (
+    <View style={styles.col} testID="qs-results" {...({ dataSet: { pending: pending ? 'true' : 'false' } } as object)}>
+      <Card title="Results" subtitle={pending ? 'Updating…' : 'Live: they follow every change.'}>
+        <VerdictBadge state={p.verdict.state} text={p.verdict.text} testID="qs-verdict" />
+        <View style={styles.grid}>
+          {p.headline.map((s) => (
+            <ResultValue key={s.testID} label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />
+          ))}
+        </View>
+        {p.burn ? (
+          <View style={styles.list}>
+            <VerdictBadge state={p.burn.state} text={p.burn.text} testID="qs-result-burn" />
+            <ResultValue size="medium" label={p.burn.threshold.label} value={p.burn.threshold.value} si={p.burn.threshold.si} note={p.burn.threshold.note} testID={p.burn.threshold.testID} />
+          </View>
+        ) : null}
+        <View style={styles.grid}>
+          {p.details.map((s) => (
+            <ResultValue key={s.testID} size="medium" label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />
+          ))}
+        </View>
+      </Card>
+      {p.energy.length > 0 ? (
+        <Card title="Over a year" subtitle={`Energy, cost and CO₂ ${p.energyBasis}, from the assumptions you set.`} testID="qs-energy">
+          <View style={styles.grid}>
+            {p.energy.map((s) => (
+              <ResultValue key={s.testID} size="medium" label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />
+            ))}
+          </View>
+        </Card>
+      ) : (
+        <Banner tone="info" title="No yearly figures">
+          Fill in the energy and money assumptions to see energy, cost and CO₂.
+        </Banner>
+      )}
+      <View style={styles.save}>
+        <Button label="Save to a site" variant="secondary" disabled testID="qs-save-to-site" />
+        <Text variant="caption" tone="textMuted">
+          {signedIn
+            ? 'Saving a quick case into a site’s line list is not available yet. Copy the page link to keep or share this case.'
+            : 'Copy the page link to keep or share this case. Saving into a site’s line list will come for signed-in teams.'}
+        </Text>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  col: { gap: spacing.lg },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
+  list: { gap: spacing.sm },
+  save: { gap: spacing.xs },
+});

@@ -1,0 +1,245 @@
+import express from 'express';
+import request from 'supertest';
+import { insertPasswordReset } from '../../server/auth/password-resets.repository';
+import { newToken } from '../../server/auth/passwords';
+import { type ListedRoute, listRoutes, publicRoute, route } from '../../server/http/routes';
+import { insertInvitation } from '../../server/invitations/invitations.repository';
+import { addSiteMember, insertSite } from '../../server/sites/sites.repository';
+import { ROLES, type Role } from '../../shared/schemas/common';
+import { can } from '../../shared/schemas/permissions';
+import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
+
+let ctx: ApiContext;
+let owner: Agent;
+let ownerId: number;
+let teamId: number;
+const users = {} as Record<Role, { email: string; userId: number }>;
+let siteId: number;
+let resetUserId: number;
+
+const CASE = {
+  geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
+  processTemperatureC: 250,
+  layers: [{ thicknessM: 0.05, conductivity: [0.035, 0.00015] }],
+  surfaceEmissivity: 0.1,
+  ambient: { airTemperatureC: 30 },
+};
+
+beforeAll(async () => {
+  ctx = await createApiContext();
+  const o = await signUpOwner(ctx, { teamName: 'Matrix Works' });
+  owner = o.agent;
+  ownerId = o.userId;
+  teamId = o.teamId;
+  users.owner = { email: o.email, userId: o.userId };
+  for (const role of ROLES.filter((r) => r !== 'owner')) {
+    const m = await addMember(ctx, owner, role);
+    users[role] = { email: m.email, userId: m.userId };
+  }
+  siteId = await insertSite(ctx.db, { teamId, name: 'Matrix site', description: '', designBases: {}, createdBy: ownerId });
+  await addSiteMember(ctx.db, siteId, users.contractor.userId, ownerId);
+  const resettee = await signUpOwner(ctx, { teamName: 'Reset team' });
+  resetUserId = resettee.userId;
+}, 60_000);
+afterAll(async () => {
+  await ctx.close();
+});
+
+type Sample = { path: string; body?: unknown };
+let n = 0;
+const freshInvitation = async () => {
+  const { token, hash } = newToken();
+  const id = await insertInvitation(ctx.db, {
+    teamId,
+    email: uniqueEmail('inv'),
+    role: 'viewer',
+    tokenHash: hash,
+    invitedBy: ownerId,
+    expiresAt: new Date(Date.now() + 3600_000),
+  });
+  return { id, token };
+};
+const freshSite = () => insertSite(ctx.db, { teamId, name: `Doomed ${n++}`, description: '', designBases: {}, createdBy: ownerId });
+
+/** A request each route answers with success when the caller may use it. Every route needs one. */
+const SAMPLES: Record<string, () => Promise<Sample>> = {
+  'GET /api/v1/health': async () => ({ path: '/api/v1/health' }),
+  'GET /api/v1/auth/session': async () => ({ path: '/api/v1/auth/session' }),
+  'POST /api/v1/auth/signup': async () => ({
+    path: '/api/v1/auth/signup',
+    body: { name: 'New', email: uniqueEmail('signup'), password: STRONG_PASSWORD, teamName: 'New team' },
+  }),
+  'POST /api/v1/auth/signin': async () => ({ path: '/api/v1/auth/signin', body: { email: users.viewer.email, password: STRONG_PASSWORD } }),
+  'POST /api/v1/auth/signout': async () => ({ path: '/api/v1/auth/signout' }),
+  'POST /api/v1/auth/password-reset': async () => ({ path: '/api/v1/auth/password-reset', body: { email: users.viewer.email } }),
+  'POST /api/v1/auth/password-reset/confirm': async () => {
+    const { token, hash } = newToken();
+    await insertPasswordReset(ctx.db, { userId: resetUserId, tokenHash: hash, expiresAt: new Date(Date.now() + 3600_000) });
+    return { path: '/api/v1/auth/password-reset/confirm', body: { token, password: STRONG_PASSWORD } };
+  },
+  'GET /api/v1/invitations/:token': async () => ({ path: `/api/v1/invitations/${(await freshInvitation()).token}` }),
+  'POST /api/v1/invitations/:token/accept': async () => ({
+    path: `/api/v1/invitations/${(await freshInvitation()).token}/accept`,
+    body: { name: 'Joiner', password: STRONG_PASSWORD },
+  }),
+  'POST /api/v1/team/invitations': async () => ({ path: '/api/v1/team/invitations', body: { email: uniqueEmail('invited'), role: 'viewer' } }),
+  'DELETE /api/v1/team/invitations/:id': async () => ({ path: `/api/v1/team/invitations/${(await freshInvitation()).id}` }),
+  'GET /api/v1/team': async () => ({ path: '/api/v1/team' }),
+  'PATCH /api/v1/team/members/:userId': async () => ({ path: `/api/v1/team/members/${users.viewer.userId}`, body: { role: 'viewer' } }),
+  'DELETE /api/v1/team/members/:userId': async () => {
+    const m = await addMember(ctx, owner, 'viewer');
+    return { path: `/api/v1/team/members/${m.userId}` };
+  },
+  'GET /api/v1/me/settings': async () => ({ path: '/api/v1/me/settings' }),
+  'PATCH /api/v1/me/settings': async () => ({ path: '/api/v1/me/settings', body: { unitSystem: 'SI' } }),
+  'GET /api/v1/sites': async () => ({ path: '/api/v1/sites' }),
+  'POST /api/v1/sites': async () => ({ path: '/api/v1/sites', body: { name: `Matrix new ${n++}` } }),
+  'GET /api/v1/sites/:id': async () => ({ path: `/api/v1/sites/${siteId}` }),
+  'PATCH /api/v1/sites/:id': async () => ({ path: `/api/v1/sites/${siteId}`, body: { designBases: { touch: { airTemperatureC: 38 } } } }),
+  'DELETE /api/v1/sites/:id': async () => ({ path: `/api/v1/sites/${await freshSite()}` }),
+  'POST /api/v1/sites/:id/members': async () => ({ path: `/api/v1/sites/${siteId}/members`, body: { userId: users.contractor.userId } }),
+  'DELETE /api/v1/sites/:id/members/:userId': async () => {
+    await addSiteMember(ctx.db, siteId, users.viewer.userId, ownerId);
+    return { path: `/api/v1/sites/${siteId}/members/${users.viewer.userId}` };
+  },
+  'GET /api/v1/dev/mail': async () => ({ path: '/api/v1/dev/mail' }),
+  'POST /api/v1/calculations': async () => ({ path: '/api/v1/calculations', body: CASE }),
+};
+
+async function agentFor(role: Role | 'anonymous'): Promise<Agent> {
+  const agent = await ctx.agent();
+  if (role === 'anonymous') return agent;
+  const res = await agent.post('/api/v1/auth/signin').set('X-CSRF-Token', agent.csrf).send({ email: users[role].email, password: STRONG_PASSWORD }).expect(200);
+  agent.csrf = res.body.csrfToken;
+  return agent;
+}
+
+function expectedOutcome(r: ListedRoute, who: Role | 'anonymous'): 'allowed' | 401 | 403 {
+  const rule = r.rule!;
+  if (rule.kind === 'public') return 'allowed';
+  if (who === 'anonymous') return 401;
+  if (rule.kind === 'signedIn') return 'allowed';
+  return can(who, rule.permission) ? 'allowed' : 403;
+}
+
+describe('route registry', () => {
+  it('when the API router is listed, then every route declares an access rule as its first step', () => {
+    const routes = listRoutes(ctx.app.locals.apiRouter);
+    expect(routes.length).toBeGreaterThanOrEqual(25);
+    const missing = routes.filter((r) => !r.rule).map((r) => `${r.method} ${r.path}`);
+    expect(missing).toEqual([]);
+  });
+
+  it('when a route is mounted without a rule, then the listing shows it unruled and route() refuses it', () => {
+    const router = express.Router();
+    router.get('/bare', (_req, res) => {
+      res.end();
+    });
+    route(router, 'get', '/ruled', publicRoute(), (_req, res) => {
+      res.end();
+    });
+    const listed = listRoutes(router);
+    expect(listed.find((r) => r.path === '/bare')!.rule).toBeUndefined();
+    expect(listed.find((r) => r.path === '/ruled')!.rule).toEqual({ kind: 'public' });
+    expect(() => route(router, 'get', '/x', ((_req: unknown, _res: unknown, next: () => void) => next()) as never)).toThrow(/no access rule/);
+  });
+
+  it('when the route list is compared with the matrix samples, then every route has a sample', () => {
+    const keys = listRoutes(ctx.app.locals.apiRouter).map((r) => `${r.method} ${r.path}`);
+    expect(keys.filter((k) => !SAMPLES[k])).toEqual([]);
+  });
+});
+
+describe('role matrix', () => {
+  const WHO: (Role | 'anonymous')[] = ['anonymous', ...ROLES];
+  it('when every role calls every route, then exactly the roles the permission table allows get through', async () => {
+    const routes = listRoutes(ctx.app.locals.apiRouter);
+    const mismatches: string[] = [];
+    for (const r of routes) {
+      for (const who of WHO) {
+        const sample = await SAMPLES[`${r.method} ${r.path}`]();
+        const agent = await agentFor(who);
+        const method = r.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+        let req = agent[method](sample.path).set('X-CSRF-Token', agent.csrf);
+        if (sample.body !== undefined) req = req.send(sample.body as object);
+        const res = await req;
+        const expected = expectedOutcome(r, who);
+        const ok = expected === 'allowed' ? res.status >= 200 && res.status < 300 : res.status === expected;
+        if (!ok) mismatches.push(`${r.method} ${r.path} as ${who}: expected ${expected}, got ${res.status} ${JSON.stringify(res.body).slice(0, 200)}`);
+        if (expected !== 'allowed') expect(res.body.errors?.[0]?.code).toBe(expected === 401 ? 'UNAUTHENTICATED' : 'FORBIDDEN');
+      }
+    }
+    expect(mismatches).toEqual([]);
+  }, 120_000);
+
+  it('when a safety officer edits more than the touch basis, then 403; the touch basis alone is saved', async () => {
+    const safety = await agentFor('safety');
+    await safety.patch(`/api/v1/sites/${siteId}`).set('X-CSRF-Token', safety.csrf).send({ name: 'Renamed' }).expect(403);
+    await safety
+      .patch(`/api/v1/sites/${siteId}`)
+      .set('X-CSRF-Token', safety.csrf)
+      .send({ designBases: { energy: { airTemperatureC: 5 } } })
+      .expect(403);
+    const ok = await safety
+      .patch(`/api/v1/sites/${siteId}`)
+      .set('X-CSRF-Token', safety.csrf)
+      .send({ designBases: { touch: { airTemperatureC: 41, windSpeedMS: 0 } } })
+      .expect(200);
+    expect(ok.body.site.designBases.touch).toEqual({ airTemperatureC: 41, windSpeedMS: 0 });
+  });
+
+  it('when a contractor lists or opens sites, then only the sites they were invited to exist for them', async () => {
+    const other = await freshSite();
+    const contractor = await agentFor('contractor');
+    const list = await contractor.get('/api/v1/sites').expect(200);
+    expect(list.body.sites.map((s: { id: number }) => s.id)).toEqual([siteId]);
+    await contractor.get(`/api/v1/sites/${other}`).expect(404);
+    const viewer = await agentFor('viewer');
+    const all = await viewer.get('/api/v1/sites').expect(200);
+    expect(all.body.sites.map((s: { id: number }) => s.id)).toEqual(expect.arrayContaining([siteId, other]));
+  });
+});
+
+describe('team isolation', () => {
+  it('when another team\'s owner reads or writes this team\'s ids, then 404 and no data', async () => {
+    const intruder = await signUpOwner(ctx, { teamName: 'Intruders' });
+    const a = intruder.agent;
+    const { id: invitationId } = await freshInvitation();
+    const attempts = [
+      a.get(`/api/v1/sites/${siteId}`),
+      a.patch(`/api/v1/sites/${siteId}`).set('X-CSRF-Token', a.csrf).send({ name: 'Taken over' }),
+      a.delete(`/api/v1/sites/${siteId}`).set('X-CSRF-Token', a.csrf),
+      a.post(`/api/v1/sites/${siteId}/members`).set('X-CSRF-Token', a.csrf).send({ userId: intruder.userId }),
+      a.delete(`/api/v1/sites/${siteId}/members/${users.contractor.userId}`).set('X-CSRF-Token', a.csrf),
+      a.patch(`/api/v1/team/members/${users.engineer.userId}`).set('X-CSRF-Token', a.csrf).send({ role: 'viewer' }),
+      a.delete(`/api/v1/team/members/${users.engineer.userId}`).set('X-CSRF-Token', a.csrf),
+      a.delete(`/api/v1/team/invitations/${invitationId}`).set('X-CSRF-Token', a.csrf),
+    ];
+    for (const attempt of attempts) {
+      const res = await attempt;
+      expect(res.status).toBe(404);
+      expect(JSON.stringify(res.body)).not.toContain('Matrix');
+    }
+    const list = await a.get('/api/v1/sites').expect(200);
+    expect(list.body.sites).toEqual([]);
+    const team = await a.get('/api/v1/team').expect(200);
+    expect(team.body.members.map((m: { userId: number }) => m.userId)).toEqual([intruder.userId]);
+    // Nothing changed on our side.
+    const site = await owner.get(`/api/v1/sites/${siteId}`).expect(200);
+    expect(site.body.site.name).toBe('Matrix site');
+    const engineer = await ctx.db('memberships').where({ team_id: teamId, user_id: users.engineer.userId }).first();
+    expect(engineer.role).toBe('engineer');
+  });
+
+  it('when a client sends a team id of its own, then it is refused as an unknown field (scope comes from the session)', async () => {
+    const res = await owner.post('/api/v1/sites').set('X-CSRF-Token', owner.csrf).send({ name: 'Smuggled', teamId: 999 });
+    expect(res.status).toBe(400);
+    expect(res.body.errors[0].field).toBe('teamId');
+  });
+
+  it('when an id is not a number, then the route answers 404', async () => {
+    await owner.get('/api/v1/sites/abc').expect(404);
+    await owner.get('/api/v1/sites/99999999999999').expect(404);
+    await request(ctx.app).get('/api/v1/no-such-route').expect(404);
+  });
+});

@@ -1,0 +1,172 @@
+/**
+ * A new team from nothing, in a real browser: create a team, invite an engineer, follow the caught
+ * invitation e-mail, join, sign out and sign back in as the engineer. Once on a phone and once on a
+ * wide screen, with a screenshot at each step.
+ */
+import type { Page } from 'playwright-core';
+
+import {
+  assertNoCspViolations,
+  assertOnlyLoopback,
+  assertWebAppBuilt,
+  gotoApp,
+  openBrowser,
+  screenshot,
+  startTestServer,
+  tokenFromMail,
+  VIEWPORTS,
+  viewportTag,
+  type OpenedBrowser,
+  type TestServer,
+} from './harness';
+
+jest.setTimeout(180_000);
+
+const OWNER_PASSWORD = 'copper kettle drifts over seven quiet hills';
+const ENGINEER_PASSWORD = 'amber lantern beside the chilled water header';
+
+let server: TestServer;
+
+beforeAll(async () => {
+  assertWebAppBuilt();
+  server = await startTestServer();
+});
+
+afterAll(async () => {
+  await server?.close();
+});
+
+async function fill(page: Page, testId: string, value: string) {
+  const input = page.getByTestId(testId);
+  await input.click();
+  await input.fill(value);
+}
+
+async function signOut(page: Page) {
+  await page.getByRole('link', { name: 'Settings' }).click();
+  await page.waitForURL('**/settings');
+  await page.getByTestId('sign-out').click();
+  await page.waitForURL((u) => new URL(u).pathname === '/');
+  await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+}
+
+describe.each([
+  ['phone', VIEWPORTS.phone],
+  ['desktop', VIEWPORTS.desktop],
+])('on a %s screen', (_label, viewport) => {
+  const tag = viewportTag(viewport);
+  const ownerEmail = `owner-${tag}@north-ridge.example`;
+  const engineerEmail = `engineer-${tag}@north-ridge.example`;
+  const teamName = `North Ridge Works ${tag}`;
+  let opened: OpenedBrowser;
+
+  beforeAll(async () => {
+    opened = await openBrowser({ viewport });
+  });
+
+  afterAll(async () => {
+    await opened?.close();
+  });
+
+  it('when an owner creates a team and invites an engineer, then the engineer joins through the e-mailed link and can sign in', async () => {
+    const { page } = opened;
+
+    // Sign-in page, signed out.
+    await gotoApp(page, `${server.url}/`);
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    await page.getByText('Quick sizing — no account needed').waitFor();
+    await screenshot(page, `auth-invite-${tag}-01-sign-in`);
+
+    // Create the team.
+    await page.getByText('Create a team', { exact: true }).click();
+    await page.waitForURL('**/sign-up');
+    await page.getByTestId('signup-team').waitFor();
+    await fill(page, 'signup-team', teamName);
+    await fill(page, 'signup-name', 'Ada Okafor');
+    await fill(page, 'signup-email', ownerEmail);
+    await fill(page, 'signup-password', OWNER_PASSWORD);
+    await screenshot(page, `auth-invite-${tag}-02-sign-up`);
+    await page.getByTestId('signup-submit').click();
+
+    // A new team has no sites yet: the empty state explains and offers to create one.
+    await page.waitForURL('**/sites');
+    await page.getByTestId('sites-empty').waitFor();
+    await expect(page.getByRole('button', { name: 'Create a site' }).isVisible()).resolves.toBe(true);
+    await screenshot(page, `auth-invite-${tag}-03-sites-empty`);
+
+    // Invite an engineer from the Team page.
+    await page.getByRole('link', { name: 'Team' }).click();
+    await page.waitForURL('**/team');
+    await page.getByTestId('invite-email').waitFor();
+    await fill(page, 'invite-email', engineerEmail);
+    await page.getByRole('radio', { name: /^Engineer\./ }).click();
+    await page.getByTestId('invite-submit').click();
+    await page.getByTestId('invite-sent').waitFor();
+    await page.getByText(engineerEmail, { exact: true }).first().waitFor();
+    await screenshot(page, `auth-invite-${tag}-04-invited`);
+
+    // The invitation e-mail is caught, and shows in the owner's caught-mail panel too.
+    const mail = await server.mail.waitFor(engineerEmail);
+    const { link, token } = tokenFromMail(mail);
+    expect(new URL(link).pathname).toBe('/accept-invite');
+    expect(token.length).toBeGreaterThan(16);
+    await page.getByTestId('caught-mail').getByRole('button', { name: 'Refresh' }).click();
+    await page.getByTestId('caught-mail').getByText(`To ${engineerEmail}`, { exact: false }).first().waitFor();
+    await screenshot(page, `auth-invite-${tag}-05-caught-mail`);
+
+    // The owner signs out; the engineer opens the link.
+    await signOut(page);
+    await gotoApp(page, link);
+    await page.getByRole('heading', { name: `Join ${teamName}` }).waitFor();
+    await expect(page.getByTestId('invite-role').innerText()).resolves.toContain('Engineer');
+    await fill(page, 'accept-name', 'Bram Lindqvist');
+    await fill(page, 'accept-password', ENGINEER_PASSWORD);
+    await screenshot(page, `auth-invite-${tag}-06-accept-invite`);
+    await page.getByTestId('accept-submit').click();
+    await page.waitForURL('**/sites');
+    await page.getByTestId('sites-empty').waitFor();
+    await screenshot(page, `auth-invite-${tag}-07-joined`);
+
+    // Sign out, then sign in again as the engineer.
+    await signOut(page);
+    await fill(page, 'signin-email', engineerEmail);
+    await fill(page, 'signin-password', ENGINEER_PASSWORD);
+    await page.getByTestId('signin-submit').click();
+    await page.waitForURL('**/sites');
+    await page.getByRole('link', { name: 'Settings' }).click();
+    await page.waitForURL('**/settings');
+    await page.getByText(`Engineer in ${teamName}`).waitFor();
+    await screenshot(page, `auth-invite-${tag}-08-engineer-signed-in`);
+
+    // The unit system is stored for the user: it survives a reload.
+    await page.getByRole('radio', { name: /^US customary/ }).click();
+    await page.getByTestId('units-message').waitFor();
+    await gotoApp(page, `${server.url}/settings`);
+    await expect(page.getByRole('radio', { name: /^US customary/ }).getAttribute('aria-checked')).resolves.toBe('true');
+    await expect(page.getByRole('radio', { name: /^SI\./ }).getAttribute('aria-checked')).resolves.toBe('false');
+
+    // The team now lists both people with their roles.
+    await page.getByRole('link', { name: 'Team' }).click();
+    await page.getByTestId(`member-${engineerEmail}`).waitFor();
+    await expect(page.getByTestId(`member-${engineerEmail}`).innerText()).resolves.toContain('Engineer');
+    await expect(page.getByTestId(`member-${ownerEmail}`).innerText()).resolves.toContain('Owner');
+    await screenshot(page, `auth-invite-${tag}-09-team-as-engineer`);
+
+    assertNoCspViolations(page);
+    assertOnlyLoopback(opened.requests);
+  });
+
+  it('when the invitation link is opened a second time, then it is refused as no longer valid', async () => {
+    const { page } = opened;
+    const mail = await server.mail.waitFor(engineerEmail);
+    await page.context().clearCookies();
+    await gotoApp(page, tokenFromMail(mail).link);
+    await page.getByText('This invitation is no longer valid').waitFor();
+    await screenshot(page, `auth-invite-${tag}-10-used-link`);
+    assertNoCspViolations(page);
+  });
+});
+
+afterAll(() => {
+  assertOnlyLoopback();
+});
