@@ -102,13 +102,13 @@ export function solveCase(rand: () => number): CalcCase {
     base.ambient.radiantTemperatureC = base.ambient.airTemperatureC;
   } else {
     const g = base.geometry;
-    const bound = g.type === 'pipe' ? { maxWPerM: between(rand, 30, 300) } : g.type === 'flat' ? { maxWPerM2: between(rand, 40, 400) } : { maxW: between(rand, 2000, 60000) };
+    const bound = g.type === 'pipe' ? { maxWPerM: between(rand, 60, 400) } : g.type === 'flat' ? { maxWPerM2: between(rand, 40, 400) } : { maxW: between(rand, 2000, 60000) };
     solveFor = { criterion: 'heatLoss', ...bound };
   }
   return {
     ...base,
     solveFor,
-    round: { seriesM: [0.02, 0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
+    round: { seriesM: [0.02, 0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1, 0.12, 0.15], maxSingleLayerM: 0.15 },
   };
 }
 

@@ -30,7 +30,7 @@ export class ConfigError extends Error {}
 
 const ROOT = path.resolve(__dirname, '..');
 
-function int(env: NodeJS.ProcessEnv, name: string, fallback: number, problems: string[], min = 0, max = 65535): number {
+function int(env: Env, name: string, fallback: number, problems: string[], min = 0, max = 65535): number {
   const raw = env[name];
   if (raw === undefined || raw === '') return fallback;
   const n = Number(raw);
@@ -41,7 +41,7 @@ function int(env: NodeJS.ProcessEnv, name: string, fallback: number, problems: s
   return n;
 }
 
-function bool(env: NodeJS.ProcessEnv, name: string, fallback: boolean, problems: string[]): boolean {
+function bool(env: Env, name: string, fallback: boolean, problems: string[]): boolean {
   const raw = env[name];
   if (raw === undefined || raw === '') return fallback;
   if (/^(1|true|yes|on)$/i.test(raw)) return true;
@@ -68,7 +68,9 @@ function persistedDevSecret(dir: string): string {
 }
 
 /** Reads and validates the environment once; throws ConfigError listing every problem. */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+export type Env = Record<string, string | undefined>;
+
+export function loadConfig(env: Env = process.env): Config {
   const problems: string[] = [];
   const nodeEnv = env.NODE_ENV === 'production' ? 'production' : env.NODE_ENV === 'test' ? 'test' : 'development';
   const port = int(env, 'PORT', 8080, problems);

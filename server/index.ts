@@ -69,4 +69,7 @@ async function main(): Promise<void> {
   process.on('SIGINT', () => shutdown('SIGINT'));
 }
 
+// Belt and braces: a stray rejection is logged, not allowed to stop the server.
+process.on('unhandledRejection', (reason) => console.error('Unhandled rejection:', reason));
+
 void main();

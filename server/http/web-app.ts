@@ -74,7 +74,13 @@ export function mountWebApp(app: Express, distDir: string): void {
     });
     return;
   }
-  app.use(express.static(distDir, { extensions: ['html'], index: ['index.html'], fallthrough: true, dotfiles: 'ignore' }));
+  app.use(express.static(distDir, { index: false, redirect: false, fallthrough: true, dotfiles: 'ignore' }));
+  // Route groups such as (app)/ do not appear in URLs; a file outside a group wins.
+  const pages = new Map<string, string>();
+  for (const rel of htmlFiles(distDir).map((f) => f.replace(/\\/g, '/')).sort((a, b) => a.split('(').length - b.split('(').length)) {
+    const key = rel.split('/').filter((seg) => !/^\(.*\)$/.test(seg)).join('/');
+    if (!pages.has(key)) pages.set(key, rel);
+  }
   const patterns = dynamicPatterns(distDir);
   const notFound = fs.existsSync(path.join(distDir, '+not-found.html')) ? '+not-found.html' : null;
   const send = (res: Response, rel: string, status = 200) => {
@@ -88,6 +94,13 @@ export function mountWebApp(app: Express, distDir: string): void {
         return p;
       }
     });
+    if (!parts.some((p) => p === '..' || p === '.' || p.includes('/') || p.includes('\\'))) {
+      const route = parts.join('/');
+      for (const candidate of route ? [`${route}.html`, `${route}/index.html`] : ['index.html']) {
+        const file = pages.get(candidate);
+        if (file) return send(res, file);
+      }
+    }
     const hit = patterns.find((p) => matches(p, parts));
     if (hit) return send(res, hit.file);
     if (notFound) return send(res, notFound, 404);

@@ -216,6 +216,28 @@ describe('errors and warnings', () => {
     expect('error' in outs[7] && outs[7].error.code).toBe('CONDUCTIVITY_NOT_POSITIVE');
   });
 
+  it('when nested objects carry unknown or misplaced fields, then the path names them', () => {
+    const field = (c: unknown) => {
+      const o = runCase(c);
+      return 'error' in o ? o.error.field : 'ok';
+    };
+    expect(field({ ...pipe(), ambient: { airTemperatureC: 20, foo: 1 } })).toBe('ambient.foo');
+    expect(field({ ...pipe(), geometry: { type: 'pipe', outerDiameterM: 0.1, orientation: 'horizontal', headType: 'flat' } })).toBe('geometry.headType');
+    expect(field({ ...pipe(), round: { seriesM: [0.05] } })).toBe('round');
+    expect(field({ ...pipe(), geometry: { type: 'flat', orientation: 'vertical', heightM: 1 }, run: { lengthM: 1, massFlowKgPerS: 1, specificHeatJPerKgK: 1 } })).toBe('run');
+    expect(field({ ...pipe(), layers: [{ thicknessM: 0.05, conductivity: [0.04, Number.NaN] }] })).toBe('layers[0].conductivity[1]');
+    expect(field({ ...pipe(), ambient: { airTemperatureC: 20, relativeHumidityPct: 0 } })).toBe('ambient.relativeHumidityPct');
+  });
+
+  it('when the input is not a case at all, then runCase answers an error item and never throws', () => {
+    for (const bad of [null, 42, [], 'x', { geometry: null }, { ...pipe(), layers: [null] }]) {
+      const out = runCase(bad);
+      expect('error' in out).toBe(true);
+    }
+    const out = runCase(null);
+    expect('error' in out && out.error.field).toBe('(case)');
+  });
+
   it('when a layer runs above its service temperature, then a warning says so', () => {
     const r = analyse(pipe({ layers: [{ thicknessM: 0.05, conductivity: [0.04], maxServiceTemperatureC: 200 }] }));
     expect(r.warnings.map((w) => w.code)).toContain('MAX_SERVICE_TEMPERATURE_EXCEEDED');

@@ -420,7 +420,11 @@ function solveThickness(p: Prepared, crit: Criterion, maxT: number, baseThick: n
  * @param maxSingleLayerM - largest single layer [m]; Infinity when unlimited
  * @returns layer thicknesses [m], inside out ([] for t* = 0)
  * @remarks Throws ImpossibleTargetError (SERIES_TOO_THIN) when even two of the thickest layers are thinner
- * than t*.
+ * than t*. Rounding only ever adds thickness, which keeps the build-up inside the range where every
+ * thickness meets the criterion.
+ * @example
+ * roundThicknessToSeries(0.052, [0.025, 0.04, 0.05, 0.06]); // → [0.06]
+ * roundThicknessToSeries(0.13, [0.04, 0.05, 0.06, 0.08, 0.1], 0.1); // → [0.08, 0.05]
  */
 export function roundThicknessToSeries(thicknessM: number, seriesM: readonly number[], maxSingleLayerM = Infinity): number[] {
   if (thicknessM <= 0) return [];
@@ -562,8 +566,9 @@ function prepare(c: CalcCase): Prepared {
  * check every part. Throws {@link CalcInputError} (with the field path) for bad input and
  * {@link ImpossibleTargetError} when no thickness up to the maximum meets the criterion.
  * @example
- * // DESIGN §6 case (independent model): 4" pipe at 250 °C, 30 °C still air, ε = 0.1, surface ≤ 60 °C
- * // → t* ≈ 0.052 m, rounded 0.06 m, 98.2 W/m, Ts 56.5 °C.
+ * // The calculation contract's example, whose figures come from an independent model: 114.3 mm pipe at
+ * // 250 °C, k = 0.035 + 0.00015·T, ε = 0.1, 30 °C still air, surface ≤ 60 °C, series up to 0.1 m
+ * // → t* ≈ 0.052 m, rounded 0.06 m, 98.2 W/m, Ts 56.5 °C, h_c 4.31, h_r 0.72 W/(m²·K).
  *
  * References:
  * 1. ASTM C680-19. 2. ISO 12241:2022. 3. Incropera & DeWitt, 6th ed., §3.3.2, §5.3, §8.3.1.

@@ -25,7 +25,7 @@ export function typicalConditions(purpose: PurposeId): Partial<Draft> {
     }
     case 'conservation': {
       const l = layerOf('mineral-fibre-pipe-c547-type-i');
-      return { processTemperatureC: 250, airTemperatureC: 15, radiantTemperatureC: 15, windSpeedMS: 3, relativeHumidityPct: 70, ...(l ? { layers: [l] } : {}), ...finish('aluminium-oxidised') };
+      return { processTemperatureC: 250, airTemperatureC: 15, radiantTemperatureC: 15, windSpeedMS: 3, relativeHumidityPct: 70, maxHeatLossWPerM: 80, maxHeatFluxWPerM2: 100, maxHeatLossW: 8000, ...(l ? { layers: [l] } : {}), ...finish('aluminium-oxidised') };
     }
     case 'condensation': {
       const l = layerOf('flexible-elastomeric-c534-grade-1-type-i', 0.025);

@@ -9,7 +9,7 @@ import type { LiveOutput } from './live';
 import { CONTACT_MATERIALS, PURPOSES, limitValue, meetsPurpose, purposeAvailable, type Draft } from './quick-case';
 import type { Quantity, UnitSystem } from './units';
 
-export type Shown = { label: string; value: Formatted; si: number | null; note?: string; testID: string };
+export type Shown = { label: string; /** For the pinned summary. */ short?: string; value: Formatted; si: number | null; note?: string; testID: string };
 export type VerdictView = { state: 'pass' | 'caution' | 'fail'; text: string };
 
 export type Presentation = {
@@ -81,15 +81,17 @@ export function present(d: Draft, out: Extract<LiveOutput, { kind: 'ok' }>, syst
     const exact = r.thicknessM !== undefined ? `least that works: ${formatThickness(r.thicknessM, system).text}` : undefined;
     headline.push({
       label: d.layers.length > 1 ? 'Outer layer needed' : 'Thickness needed',
+      short: 'Thickness',
       value: formatThickness(t, system),
       si: t,
       note: [split, exact, 'rounded up to the series'].filter(Boolean).join('; '),
       testID: 'qs-result-thickness',
     });
   }
-  headline.push({ label: 'Surface temperature', value: formatTemperature(r.surfaceTemperatureC, system), si: r.surfaceTemperatureC, testID: 'qs-result-surfaceTemperature', note: d.kind === 'vessel' ? 'hottest part of the vessel' : undefined });
+  headline.push({ label: 'Surface temperature', short: 'Surface', value: formatTemperature(r.surfaceTemperatureC, system), si: r.surfaceTemperatureC, testID: 'qs-result-surfaceTemperature', note: d.kind === 'vessel' ? 'hottest part of the vessel' : undefined });
   headline.push({
     label: `${gain ? 'Heat gain' : 'Heat loss'}${d.kind === 'pipe' ? ' per length' : d.kind === 'wall' ? ' per area' : ', whole vessel'}`,
+    short: gain ? 'Heat gain' : 'Heat loss',
     value: formatSignificant(q, Math.abs(out.heatFlow), system),
     si: out.heatFlow,
     testID: 'qs-result-heatLoss',
@@ -97,6 +99,7 @@ export function present(d: Draft, out: Extract<LiveOutput, { kind: 'ok' }>, syst
   if (r.outletTemperatureC !== undefined) {
     headline.push({
       label: 'Temperature at the end of the run',
+      short: 'End of run',
       value: formatTemperature(r.outletTemperatureC, system),
       si: r.outletTemperatureC,
       note: d.processTemperatureC !== null ? `a drop of ${formatTemperatureDelta(d.processTemperatureC - r.outletTemperatureC, system).text}` : undefined,
@@ -106,6 +109,7 @@ export function present(d: Draft, out: Extract<LiveOutput, { kind: 'ok' }>, syst
   if (r.hoursToZeroC !== undefined) {
     headline.push({
       label: 'Standing water reaches 0 °C after',
+      short: 'To 0 °C',
       value: r.hoursToZeroC === null ? { value: 'No freezing', unit: '', text: 'No freezing', spoken: 'No freezing: the air is not below 0 degrees' } : formatHours(r.hoursToZeroC),
       si: r.hoursToZeroC,
       note: r.hoursToZeroC === null ? 'the air is not below 0 °C' : undefined,

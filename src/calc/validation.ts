@@ -20,8 +20,8 @@ function show(quantity: Quantity, system: UnitSystem, si: number): string {
 }
 
 function numberRule(r: Rule, system: UnitSystem) {
-  let s = yup.number().typeError(`Enter ${r.label} as a number.`);
-  s = r.optional ? s.nullable() : s.nullable().test('present', `Enter ${r.label} as a number.`, (v) => v !== null && v !== undefined);
+  let s = yup.number().typeError(`Enter ${r.label} as a number.`).nullable();
+  if (!r.optional) s = s.test('present', `Enter ${r.label} as a number.`, (v) => v !== null && v !== undefined);
   if (r.min !== undefined) {
     const min = r.min;
     s = r.exclusiveMin

@@ -124,7 +124,7 @@ describe('health', () => {
       expect(res.status).toBe(503);
       expect(res.body).toEqual({ status: 'degraded', database: 'down' });
       // A signed session cookie makes the session store read the (dead) database.
-      const { sign } = await import('cookie-signature');
+      const { sign } = require('cookie-signature') as { sign: (value: string, secret: string) => string };
       const cookie = `lagline.sid=s%3A${encodeURIComponent(sign('some-session-id', server.config.sessionSecret))}`;
       const session = await request(app).get('/api/v1/auth/session').set('Cookie', cookie);
       expect(session.status).toBe(503);

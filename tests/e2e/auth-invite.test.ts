@@ -7,12 +7,14 @@ import type { Page } from 'playwright-core';
 
 import {
   assertNoCspViolations,
+  assertNoPageErrors,
   assertOnlyLoopback,
   assertWebAppBuilt,
   gotoApp,
   openBrowser,
   screenshot,
   startTestServer,
+  tabTo,
   tokenFromMail,
   VIEWPORTS,
   viewportTag,
@@ -94,8 +96,9 @@ describe.each([
     await expect(page.getByRole('button', { name: 'Create a site' }).isVisible()).resolves.toBe(true);
     await screenshot(page, `auth-invite-${tag}-03-sites-empty`);
 
-    // Invite an engineer from the Team page.
-    await page.getByRole('link', { name: 'Team' }).click();
+    // Invite an engineer from the Team page, reached with the keyboard alone.
+    await tabTo(page, 'Team');
+    await page.keyboard.press('Enter');
     await page.waitForURL('**/team');
     await page.getByTestId('invite-email').waitFor();
     await fill(page, 'invite-email', engineerEmail);
@@ -153,6 +156,7 @@ describe.each([
     await screenshot(page, `auth-invite-${tag}-09-team-as-engineer`);
 
     assertNoCspViolations(page);
+    assertNoPageErrors(page);
     assertOnlyLoopback(opened.requests);
   });
 
@@ -164,6 +168,7 @@ describe.each([
     await page.getByText('This invitation is no longer valid').waitFor();
     await screenshot(page, `auth-invite-${tag}-10-used-link`);
     assertNoCspViolations(page);
+    assertNoPageErrors(page);
   });
 });
 

@@ -53,11 +53,14 @@ export type OpenedBrowser = {
   requests: string[];
   /** Violations reported by any page of this browser. */
   cspViolations: CspViolation[];
+  /** Uncaught errors thrown in the page. */
+  pageErrors: string[];
   close: () => Promise<void>;
 };
 
 const allRequests: string[] = [];
 const violationsByContext = new WeakMap<BrowserContext, CspViolation[]>();
+const pageErrorsByContext = new WeakMap<BrowserContext, string[]>();
 
 const LOOPBACK_HOSTS = new Set(['127.0.0.1', 'localhost', '[::1]', '::1']);
 const LOCAL_SCHEMES = new Set(['data:', 'blob:', 'about:']);
@@ -117,6 +120,9 @@ export async function openBrowser(opts: { viewport?: Viewport } = {}): Promise<O
   await context.addInitScript({ content: CSP_LISTENER });
 
   const page = await context.newPage();
+  const pageErrors: string[] = [];
+  pageErrorsByContext.set(context, pageErrors);
+  page.on('pageerror', (e) => pageErrors.push(`${page.url()}: ${e.message}`));
   page.on('console', (msg) => {
     // Chromium also logs refusals; keep them in case a violation fires before the listener exists.
     const text = msg.text();
@@ -131,6 +137,7 @@ export async function openBrowser(opts: { viewport?: Viewport } = {}): Promise<O
     page,
     requests,
     cspViolations,
+    pageErrors,
     close: async () => {
       await context.close().catch(() => undefined);
       await browser.close().catch(() => undefined);
@@ -144,6 +151,28 @@ export function assertNoCspViolations(page: Page): void {
   if (violations.length > 0) {
     throw new Error(`Content security policy violations:\n${violations.map((v) => JSON.stringify(v)).join('\n')}`);
   }
+}
+
+/** Fails when the page threw an uncaught error (a render crash, a failed handler). */
+export function assertNoPageErrors(page: Page): void {
+  const errors = pageErrorsByContext.get(page.context()) ?? [];
+  if (errors.length > 0) throw new Error(`Uncaught errors in the page:\n${errors.join('\n')}`);
+}
+
+/**
+ * Presses Tab until the focused element's accessible text is `name` (at most `maxTabs` times), so a
+ * test can prove a control is reachable by keyboard; returns how many presses it took.
+ */
+export async function tabTo(page: Page, name: string | RegExp, maxTabs = 40): Promise<number> {
+  for (let i = 1; i <= maxTabs; i++) {
+    await page.keyboard.press('Tab');
+    const label = await page.evaluate(() => {
+      const el = document.activeElement as HTMLElement | null;
+      return el ? (el.getAttribute('aria-label') || el.innerText || '').trim() : '';
+    });
+    if (typeof name === 'string' ? label === name : name.test(label)) return i;
+  }
+  throw new Error(`Could not reach "${String(name)}" with ${maxTabs} presses of Tab`);
 }
 
 /** Fails when any browser opened by this harness (or the given list) requested a non-loopback URL. */

@@ -24,7 +24,7 @@ export type ApiContext = {
 };
 
 /** supertest against createApp on a fresh database, with a mail catcher. */
-export async function createApiContext(opts: { seed?: boolean; config?: Partial<Config>; env?: NodeJS.ProcessEnv } = {}): Promise<ApiContext> {
+export async function createApiContext(opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined> } = {}): Promise<ApiContext> {
   const database = await createTestDatabase({ seed: opts.seed });
   const mail = await startTestMail(database.db);
   const config = testConfig(opts.config, opts.env);

@@ -1,8 +1,8 @@
 import path from 'node:path';
-import { type Config, loadConfig } from '../../server/config';
+import { type Config, type Env, loadConfig } from '../../server/config';
 
 /** Test configuration: cheap bcrypt, fixed secret, generous limits unless a test overrides them. */
-export function testConfig(overrides: Partial<Config> = {}, env: NodeJS.ProcessEnv = {}): Config {
+export function testConfig(overrides: Partial<Config> = {}, env: Env = {}): Config {
   const base = loadConfig({
     NODE_ENV: 'test',
     SESSION_SECRET: 'test-secret-0123456789-abcdefghijklmnopqrstuvwxyz',

@@ -21,7 +21,7 @@ export type TestServer = {
  * A complete Lagline on 127.0.0.1:<free port>: fresh database (migrated, optionally seeded with the
  * demo team), a mail catcher on a free port, the exported web app from dist/.
  */
-export async function startTestServer(opts: { seed?: boolean; config?: Partial<Config>; env?: NodeJS.ProcessEnv } = {}): Promise<TestServer> {
+export async function startTestServer(opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined> } = {}): Promise<TestServer> {
   const database = await createTestDatabase({ seed: opts.seed });
   const mail = await startTestMail(database.db);
   const config0 = testConfig(opts.config, opts.env);

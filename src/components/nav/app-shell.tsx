@@ -17,7 +17,8 @@ export interface AppShellProps {
 
 /**
  * The signed-in frame: a bottom bar on phones, a side rail from the wide breakpoint on.
- * Both are plain links in a landmark, so Tab and Enter reach every destination.
+ * Both are plain links in a landmark, so Tab and Enter reach every destination. (Link asChild hands
+ * its child's style straight to the DOM on web, so those styles are flattened objects.)
  */
 export function AppShell({ teamName, userName, children }: AppShellProps) {
   const { width } = useWindowDimensions();
@@ -52,7 +53,7 @@ export function AppShell({ teamName, userName, children }: AppShellProps) {
                   <Pressable
                     role="link"
                     aria-current={active ? 'page' : undefined}
-                    style={[styles.railItem, active && styles.railItemActive]}
+                    style={StyleSheet.flatten([styles.railItem, active && styles.railItemActive])}
                   >
                     <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
                     <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>

@@ -40,13 +40,13 @@ export function SelectField({ label, value, options, onChange, testID }: SelectF
         </Text>
       </Pressable>
       {open ? (
-        <ScrollView style={styles.list} role="listbox" aria-label={label} nestedScrollEnabled>
+        <ScrollView style={styles.list} {...({ role: 'listbox' } as object)} aria-label={label} nestedScrollEnabled>
           {options.map((o) => {
             const selected = o.value === value;
             return (
               <Pressable
                 key={o.value}
-                role="option"
+                {...({ role: 'option' } as object)}
                 aria-selected={selected}
                 testID={testID ? `${testID}-option-${o.value}` : undefined}
                 onPress={() => {

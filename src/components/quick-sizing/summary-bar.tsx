@@ -14,13 +14,14 @@ export function SummaryBar({ draft, output, system }: { draft: Draft; output: Li
   if (output.kind === 'ok') {
     const p = present(draft, output, system);
     state = p.verdict.state;
-    const items = p.headline.slice(0, 3);
+    // The purpose's own answer (end of run, hours to 0 °C) goes before heat loss when there is one.
+    const items = p.headline.length > 3 ? [p.headline[0], p.headline[1], p.headline[p.headline.length - 1]] : p.headline.slice(0, 3);
     body = (
       <View style={styles.row}>
         {items.map((s) => (
           <View key={s.testID} style={styles.item}>
             <Text variant="caption" tone="textMuted" numberOfLines={1}>
-              {s.label}
+              {s.short ?? s.label}
             </Text>
             <Text variant="title" testID={`${s.testID}-pinned`} numberOfLines={1}>
               {s.value.text}
