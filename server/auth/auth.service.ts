@@ -84,12 +84,14 @@ export async function requestPasswordReset(
   const email = normaliseEmail(emailRaw);
   const user = await findUserByEmail(deps.db, email);
   if (!user) return;
-  const { token, hash } = newToken();
-  await insertPasswordReset(deps.db, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
-  await insertAudit(deps.db, { userId: user.id, action: 'auth.password_reset_requested', ip });
-  const link = `${deps.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
-  // Not awaited: the answer must not take longer for real accounts than for unknown ones.
-  deps.mailer.send(passwordResetMail({ to: user.email, link })).catch((e) => deps.logger.error('password reset mail failed:', e));
+  // Finished in the background: the answer must not take longer for real accounts than for unknown ones.
+  void (async () => {
+    const { token, hash } = newToken();
+    await insertPasswordReset(deps.db, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+    await insertAudit(deps.db, { userId: user.id, action: 'auth.password_reset_requested', ip });
+    const link = `${deps.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
+    await deps.mailer.send(passwordResetMail({ to: user.email, link }));
+  })().catch((e) => deps.logger.error('password reset request failed:', e));
 }
 
 export async function confirmPasswordReset(deps: { db: Db; config: Config }, token: string, password: string, ip?: string): Promise<void> {

@@ -32,8 +32,8 @@ export function typicalConditions(purpose: PurposeId): Partial<Draft> {
       return { processTemperatureC: 6, airTemperatureC: 30, radiantTemperatureC: 30, windSpeedMS: 0, relativeHumidityPct: 80, condensationMarginK: 2, ...(l ? { layers: [l] } : {}), ...finish('pvc-jacket') };
     }
     case 'holding': {
-      const l = layerOf('calcium-silicate-c533-type-i');
-      return { processTemperatureC: 150, airTemperatureC: 10, radiantTemperatureC: 10, windSpeedMS: 2, relativeHumidityPct: 70, runLengthM: 300, massFlowKgPerS: 0.5, specificHeatJPerKgK: 2300, maxChangeK: 5, ...(l ? { layers: [l] } : {}), ...finish('aluminium-oxidised') };
+      const l = layerOf('mineral-fibre-pipe-c547-type-i');
+      return { processTemperatureC: 150, airTemperatureC: 10, radiantTemperatureC: 10, windSpeedMS: 2, relativeHumidityPct: 70, runLengthM: 200, massFlowKgPerS: 2, specificHeatJPerKgK: 2300, maxChangeK: 5, ...(l ? { layers: [l] } : {}), ...finish('aluminium-oxidised') };
     }
     case 'frost': {
       const l = layerOf('cellular-glass-c552-grade-6');
