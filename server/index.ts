@@ -3,6 +3,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createDb } from './db/db';
 import { findDemoOwner } from './dev/demo.service';
+import { pingDatabase } from './health/health.repository';
 import { createLogger } from './logger';
 import { type MailCatcher, startMailCatcher } from './mail/mail-catcher';
 import { createMailer } from './mail/mailer';
@@ -20,14 +21,18 @@ async function main(): Promise<void> {
   }
   const logger = createLogger(config.logLevel);
   const db = createDb(config);
-  await db.raw('select 1').catch((e: Error) => {
-    console.error(`Cannot reach MariaDB at ${config.db.host}:${config.db.port} (${e.message}). Is it running? (bash scripts/db.sh start)`);
+  if (!(await pingDatabase(db, 5000))) {
+    console.error(`Cannot reach MariaDB at ${config.db.host}:${config.db.port}/${config.db.name}. Is it running? (bash scripts/db.sh start)`);
     process.exit(1);
-  });
+  }
 
   let catcher: MailCatcher | undefined;
   if (config.mailCatcher) {
-    catcher = await startMailCatcher(db, { port: config.smtp.port, host: config.smtp.host, onError: (e) => logger.error('mail catcher:', e) });
+    catcher = await startMailCatcher(db, { port: config.smtp.port, host: config.smtp.host, onError: (e) => logger.error('mail catcher:', e) }).catch(
+      (e: Error) => {
+        throw new Error(`the mail catcher cannot listen on ${config.smtp.host}:${config.smtp.port} (${e.message}); set SMTP_PORT`);
+      },
+    );
     logger.info(`Mail catcher on smtp://${config.smtp.host}:${catcher.port} (caught mail: GET /api/v1/dev/mail)`);
   }
   const mailer = createMailer({ ...config, smtp: { host: config.smtp.host, port: catcher?.port ?? config.smtp.port } });
@@ -72,4 +77,7 @@ async function main(): Promise<void> {
 // Belt and braces: a stray rejection is logged, not allowed to stop the server.
 process.on('unhandledRejection', (reason) => console.error('Unhandled rejection:', reason));
 
-void main();
+main().catch((e: Error) => {
+  console.error(`Lagline could not start: ${e.message}`);
+  process.exit(1);
+});

@@ -3,6 +3,8 @@ import { isPastAbsoluteTimeout } from '../../server/auth/auth.service';
 import { loadConfig } from '../../server/config';
 import { type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 
+jest.setTimeout(60_000);
+
 let ctx: ApiContext;
 beforeAll(async () => {
   ctx = await createApiContext();

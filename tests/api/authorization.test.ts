@@ -9,6 +9,8 @@ import { ROLES, type Role } from '../../shared/schemas/common';
 import type { Permission } from '../../shared/schemas/permissions';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 
+jest.setTimeout(60_000);
+
 let ctx: ApiContext;
 let owner: Agent;
 let ownerId: number;

@@ -13,6 +13,8 @@ const CASE = {
   round: { seriesM: [0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
 };
 
+jest.setTimeout(60_000);
+
 let server: TestServer;
 beforeAll(async () => {
   server = await startTestServer();

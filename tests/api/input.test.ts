@@ -1,6 +1,8 @@
 import request from 'supertest';
 import { type Agent, type ApiContext, createApiContext, signUpOwner } from '../helpers/api';
 
+jest.setTimeout(60_000);
+
 let ctx: ApiContext;
 let owner: Agent;
 let siteId: number;

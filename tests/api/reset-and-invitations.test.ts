@@ -2,6 +2,8 @@ import { hashToken } from '../../server/auth/passwords';
 import { addMember, type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 import { tokenFromMail } from '../helpers/mail';
 
+jest.setTimeout(60_000);
+
 let ctx: ApiContext;
 beforeAll(async () => {
   ctx = await createApiContext();

@@ -9,6 +9,8 @@ import { testConfig } from '../helpers/test-config';
 import { createTestDatabase, type TestDatabase } from '../helpers/test-db';
 
 const HYDRATE = 'globalThis.__EXPO_ROUTER_HYDRATE__=true;';
+jest.setTimeout(60_000);
+
 let dist: string;
 let database: TestDatabase;
 const mailer = { send: async () => undefined, close: () => undefined };

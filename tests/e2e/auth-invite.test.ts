@@ -96,6 +96,13 @@ describe.each([
     await expect(page.getByRole('button', { name: 'Create a site' }).isVisible()).resolves.toBe(true);
     await screenshot(page, `auth-invite-${tag}-03-sites-empty`);
 
+    // The empty state's one action fills it.
+    await page.getByRole('button', { name: 'Create a site' }).click();
+    await fill(page, 'site-name', 'Boiler house');
+    await page.getByTestId('site-submit').click();
+    await page.getByTestId('sites-list').getByText('Boiler house').waitFor();
+    await screenshot(page, `auth-invite-${tag}-03b-site-created`);
+
     // Invite an engineer from the Team page, reached with the keyboard alone.
     await tabTo(page, 'Team');
     await page.keyboard.press('Enter');
@@ -127,7 +134,8 @@ describe.each([
     await screenshot(page, `auth-invite-${tag}-06-accept-invite`);
     await page.getByTestId('accept-submit').click();
     await page.waitForURL('**/sites');
-    await page.getByTestId('sites-empty').waitFor();
+    // The new member sees the team's site straight away.
+    await page.getByTestId('sites-list').getByText('Boiler house').waitFor();
     await screenshot(page, `auth-invite-${tag}-07-joined`);
 
     // Sign out, then sign in again as the engineer.
@@ -167,6 +175,70 @@ describe.each([
     await gotoApp(page, tokenFromMail(mail).link);
     await page.getByText('This invitation is no longer valid').waitFor();
     await screenshot(page, `auth-invite-${tag}-10-used-link`);
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when the owner forgets the password, then the e-mailed reset link sets a new one that signs in', async () => {
+    const { page } = opened;
+    const newPassword = 'granite steps under the condensate return line';
+    await page.context().clearCookies();
+    await gotoApp(page, `${server.url}/`);
+    await page.getByText('Forgot your password?').click();
+    await page.waitForURL('**/forgot-password');
+    await fill(page, 'forgot-email', ownerEmail);
+    await page.getByTestId('forgot-submit').click();
+    await page.getByTestId('reset-sent').waitFor();
+    await screenshot(page, `auth-invite-${tag}-11-reset-requested`);
+
+    const mail = await server.mail.waitFor(ownerEmail, { subject: /password/i });
+    const { link } = tokenFromMail(mail);
+    expect(new URL(link).pathname).toBe('/reset-password');
+    await gotoApp(page, link);
+    await fill(page, 'reset-password', newPassword);
+    await fill(page, 'reset-confirm', newPassword);
+    await page.getByTestId('reset-submit').click();
+    await page.getByTestId('reset-done').waitFor();
+    await screenshot(page, `auth-invite-${tag}-12-reset-done`);
+
+    await page.getByText('Go to sign in').click();
+    await page.waitForURL((u) => new URL(u).pathname === '/');
+    await fill(page, 'signin-email', ownerEmail);
+    await fill(page, 'signin-password', OWNER_PASSWORD);
+    await page.getByTestId('signin-submit').click();
+    await page.getByText('That e-mail address and password do not match an account.').waitFor();
+    await fill(page, 'signin-password', newPassword);
+    await page.getByTestId('signin-submit').click();
+    await page.waitForURL('**/sites');
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when the owner changes a role and revokes an invitation, then the team list shows both changes', async () => {
+    const { page } = opened;
+    const strayEmail = `stray-${tag}@north-ridge.example`;
+    await page.getByRole('link', { name: 'Team' }).click();
+    await page.waitForURL('**/team');
+
+    const engineerRow = page.getByTestId(`member-${engineerEmail}`);
+    await engineerRow.getByRole('button', { name: 'Change role of Bram Lindqvist' }).click();
+    await engineerRow.getByRole('radio', { name: 'Safety officer' }).click();
+    await engineerRow.getByText('Safety officer', { exact: true }).waitFor();
+    await expect(engineerRow.getByRole('radiogroup').count()).resolves.toBe(0);
+
+    await fill(page, 'invite-email', strayEmail);
+    await page.getByRole('radio', { name: /^Viewer\./ }).click();
+    await page.getByTestId('invite-submit').click();
+    await page.getByTestId('invitation-list').getByText(strayEmail).waitFor();
+    await screenshot(page, `auth-invite-${tag}-13-role-changed`);
+    await page.getByRole('button', { name: `Revoke the invitation for ${strayEmail}` }).click();
+    await page.getByTestId('invitations-empty').waitFor();
+
+    // The server holds the same picture after a reload.
+    await gotoApp(page, `${server.url}/team`);
+    await expect(page.getByTestId(`member-${engineerEmail}`).innerText()).resolves.toContain('Safety officer');
+    await page.getByTestId('invitations-empty').waitFor();
+    await screenshot(page, `auth-invite-${tag}-14-invitation-revoked`);
     assertNoCspViolations(page);
     assertNoPageErrors(page);
   });

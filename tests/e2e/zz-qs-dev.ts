@@ -1,20 +1,19 @@
 import { openBrowser, startTestServer, VIEWPORTS } from './harness';
 (async () => {
-  const server = await startTestServer({ config: { distDir: process.env.QS_DIST || '/tmp/qs-dist' } });
+  const server = await startTestServer({ config: { distDir: '/tmp/qs-dist' } });
   try {
     for (const [name, vp] of Object.entries(VIEWPORTS)) {
       const b = await openBrowser({ viewport: vp });
-      const errors: string[] = [];
-      b.page.on('pageerror', (e) => errors.push(String(e)));
-      b.page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
-      await b.page.goto(`${server.url}/quick-sizing${process.env.QS_QUERY ?? ''}`, { waitUntil: 'load' });
-      await b.page.waitForLoadState('networkidle');
-      await b.page.waitForTimeout(500);
-      await b.page.screenshot({ path: `/tmp/qs-shots/${name}.png`, fullPage: name === 'desktop' });
-      await b.page.screenshot({ path: `/tmp/qs-shots/${name}-full.png`, fullPage: true });
-      console.log(name, 'errors:', errors.slice(0, 5));
-      console.log(await b.page.locator('[data-testid="qs-result-surfaceTemperature"]').first().getAttribute('data-si'));
-      console.log(b.page.url().slice(0, 200));
+      await b.page.goto(`${server.url}/quick-sizing`, { waitUntil: 'load' });
+      await b.page.waitForSelector('[data-testid="qs-screen"][data-ready="true"]');
+      await b.page.locator('[data-testid="qs-kind-wall"]').click();
+      await b.page.locator('[data-testid="qs-purpose-conservation"]').click();
+      await b.page.locator('[data-testid="qs-typical"]').click();
+      await b.page.waitForTimeout(600);
+      await b.page.locator('[data-testid="qs-charts"]').screenshot({ path: `/tmp/qs-shots/${name}-charts.png` });
+      await b.page.locator('[data-testid="qs-results"]').screenshot({ path: `/tmp/qs-shots/${name}-results.png` });
+      await b.page.locator('[data-testid="qs-method"]').screenshot({ path: `/tmp/qs-shots/${name}-method.png` });
+      await b.page.locator('[data-testid="qs-section-purpose"]').screenshot({ path: `/tmp/qs-shots/${name}-purpose.png` });
       await b.close();
     }
   } finally { await server.close(); }

@@ -7,6 +7,7 @@ import { ApiProblemError, problemMessage } from '../../api/client';
 import { useAcceptInvitation, useInvitation } from '../../api/session';
 import { roleDescriptions, roleLabels } from '../../api/types';
 import { colors, radius, spacing } from '../../theme';
+import { useHydrated } from '../common/use-hydrated';
 import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
 import { Banner, Button, Text, TextLink } from '../ui';
 
@@ -21,6 +22,15 @@ export function AcceptInviteForm({ token }: { token: string | undefined }) {
   const router = useRouter();
   const invitation = useInvitation(token);
   const accept = useAcceptInvitation(token ?? '');
+  const hydrated = useHydrated();
+
+  if (!hydrated) {
+    return (
+      <AuthFrame title="Join a team">
+        <ActivityIndicator color={colors.heat} />
+      </AuthFrame>
+    );
+  }
 
   if (!token) {
     return (

@@ -45,8 +45,8 @@ export function ForgotPasswordForm() {
           return (
             <View style={styles.form}>
               {status?.error ? <Banner tone="fail">{status.error}</Banner> : null}
-              <FormTextField form={form} name="email" label="E-mail address" autoComplete="email" inputMode="email" autoCapitalize="none" onSubmitEditing={() => form.handleSubmit()} />
-              <Button label="Send reset link" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block />
+              <FormTextField form={form} name="email" label="E-mail address" autoComplete="email" inputMode="email" autoCapitalize="none" onSubmitEditing={() => form.handleSubmit()} testID="forgot-email" />
+              <Button label="Send reset link" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="forgot-submit" />
             </View>
           );
         }}

@@ -5,6 +5,7 @@ import { passwordResetConfirmSchema } from '../../../shared/schemas';
 import { problemMessage } from '../../api/client';
 import { useConfirmPasswordReset } from '../../api/session';
 import { spacing } from '../../theme';
+import { useHydrated } from '../common/use-hydrated';
 import { FormTextField, validateWithSchema, type FormErrors, type FormStatus } from '../forms';
 import { Banner, Button, TextLink } from '../ui';
 
@@ -14,6 +15,8 @@ type Values = { password: string; confirm: string };
 
 export function ResetPasswordForm({ token }: { token: string | undefined }) {
   const confirm = useConfirmPasswordReset();
+  const hydrated = useHydrated();
+  if (!hydrated) return <AuthFrame title="Choose a new password">{null}</AuthFrame>;
   if (!token) {
     return (
       <AuthFrame title="Choose a new password" footer={<TextLink href="/forgot-password">Ask for a new link</TextLink>}>
@@ -56,7 +59,7 @@ export function ResetPasswordForm({ token }: { token: string | undefined }) {
           if (status?.done) {
             return (
               <View style={styles.form}>
-                <Banner tone="pass" title="Password changed">
+                <Banner tone="pass" title="Password changed" testID="reset-done">
                   Sign in with your new password.
                 </Banner>
                 <TextLink href="/">Go to sign in</TextLink>
@@ -66,9 +69,9 @@ export function ResetPasswordForm({ token }: { token: string | undefined }) {
           return (
             <View style={styles.form}>
               {status?.error ? <Banner tone="fail">{status.error}</Banner> : null}
-              <FormTextField form={form} name="password" label="New password" password hint={PASSWORD_HINT} autoComplete="new-password" />
-              <FormTextField form={form} name="confirm" label="New password again" password autoComplete="new-password" />
-              <Button label="Save new password" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block />
+              <FormTextField form={form} name="password" label="New password" password hint={PASSWORD_HINT} autoComplete="new-password" testID="reset-password" />
+              <FormTextField form={form} name="confirm" label="New password again" password autoComplete="new-password" testID="reset-confirm" />
+              <Button label="Save new password" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="reset-submit" />
             </View>
           );
         }}

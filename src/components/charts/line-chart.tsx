@@ -5,7 +5,7 @@ import Svg, { Circle, G, Line, Path, Rect, Text as SvgText } from 'react-native-
 import { colors, fonts, spacing } from '../../theme';
 import { Text } from '../ui';
 
-import { linearScale, niceDomain } from './scale';
+import { linearScale, niceDomain, tickFormatter } from './scale';
 
 export type ChartPoint = { x: number; y: number };
 export type ChartSeries = { id: string; points: ChartPoint[]; color?: string; label?: string };
@@ -36,7 +36,7 @@ const TICK_FONT = 11;
  * Our line chart: thin lines on a sunk plot area, the limit dashed in an accent, the chosen point
  * marked with its value, labelled axes with units. It sizes itself to its container.
  */
-export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides, formatX = String, formatY = String, summary, height = 220, testID }: LineChartProps) {
+export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides, formatX, formatY, summary, height = 220, testID }: LineChartProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
 
@@ -54,6 +54,11 @@ export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides
   const sx = linearScale(xDom.min, xDom.max, PAD.left, PAD.left + plotW);
   const sy = linearScale(yDom.min, yDom.max, PAD.top + plotH, PAD.top);
   const accent = limit?.tone === 'cold' ? colors.cold : colors.heat;
+  const fx = formatX ?? tickFormatter(xDom.ticks);
+  const fy = formatY ?? tickFormatter(yDom.ticks);
+  // The marker's label sits above its point; the limit's label moves below its line when they would meet.
+  const markerLabelY = marker ? Math.max(PAD.top + 12, sy(marker.y) - 8) : -100;
+  const limitLabelBelow = limit ? Math.abs(sy(limit.y) - 5 - markerLabelY) < 16 || sy(limit.y) - 5 < PAD.top + 10 : false;
 
   const path = (pts: ChartPoint[]) =>
     pts
@@ -74,13 +79,13 @@ export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides
               <G key={`y${t}`}>
                 <Line x1={PAD.left} x2={PAD.left + plotW} y1={sy(t)} y2={sy(t)} stroke={colors.border} strokeWidth={1} />
                 <SvgText x={PAD.left - 6} y={sy(t) + 4} fontSize={TICK_FONT} fontFamily={fonts.regular} fill={colors.textMuted} textAnchor="end">
-                  {formatY(t)}
+                  {fy(t)}
                 </SvgText>
               </G>
             ))}
             {xDom.ticks.map((t) => (
               <SvgText key={`x${t}`} x={sx(t)} y={PAD.top + plotH + 15} fontSize={TICK_FONT} fontFamily={fonts.regular} fill={colors.textMuted} textAnchor="middle">
-                {formatX(t)}
+                {fx(t)}
               </SvgText>
             ))}
             {(guides ?? []).map((g, i) => (
@@ -89,7 +94,7 @@ export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides
             {limit ? (
               <G>
                 <Line x1={PAD.left} x2={PAD.left + plotW} y1={sy(limit.y)} y2={sy(limit.y)} stroke={accent} strokeWidth={1.5} strokeDasharray="6 4" />
-                <SvgText x={PAD.left + plotW - 4} y={sy(limit.y) - 5} fontSize={TICK_FONT} fontFamily={fonts.semibold} fill={accent} textAnchor="end">
+                <SvgText x={PAD.left + plotW - 4} y={limitLabelBelow ? sy(limit.y) + 14 : sy(limit.y) - 5} fontSize={TICK_FONT} fontFamily={fonts.semibold} fill={accent} textAnchor="end">
                   {limit.label}
                 </SvgText>
               </G>
@@ -103,7 +108,7 @@ export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides
                 <Circle cx={sx(marker.x)} cy={sy(marker.y)} r={4.5} fill={colors.surface} stroke={colors.text} strokeWidth={1.5} />
                 <SvgText
                   x={sx(marker.x) + (sx(marker.x) > PAD.left + plotW * 0.7 ? -8 : 8)}
-                  y={Math.max(PAD.top + 12, sy(marker.y) - 8)}
+                  y={markerLabelY}
                   fontSize={12}
                   fontFamily={fonts.semibold}
                   fill={colors.text}

@@ -31,3 +31,13 @@ export function linearScale(d0: number, d1: number, r0: number, r1: number) {
   const k = d1 === d0 ? 0 : (r1 - r0) / (d1 - d0);
   return (v: number) => r0 + (v - d0) * k;
 }
+
+/** Tick text with just the decimals the step needs (2.5 → one decimal, 50 → none). */
+export function tickFormatter(ticks: readonly number[]): (v: number) => string {
+  const step = ticks.length > 1 ? Math.abs(ticks[1] - ticks[0]) : 1;
+  const decimals = step >= 1 ? (Number.isInteger(step) ? 0 : 1) : Math.min(6, Math.ceil(-Math.log10(step) - 1e-9) + (Number.isInteger(step * Math.pow(10, Math.ceil(-Math.log10(step)))) ? 0 : 1));
+  return (v: number) => {
+    const s = v.toFixed(decimals);
+    return /^-0(\.0+)?$/.test(s) ? s.slice(1) : s.replace('-', '−');
+  };
+}

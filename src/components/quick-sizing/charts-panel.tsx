@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import { fixed, formatSignificant, formatTemperature, formatThickness, significant } from '../../calc/format';
+import { formatSignificant, formatTemperature, formatThickness } from '../../calc/format';
 import type { LiveOutput } from '../../calc/live';
 import { heatQuantity } from '../../calc/present';
 import { limitValue, type Draft } from '../../calc/quick-case';
@@ -31,7 +31,6 @@ export function ChartsPanel({ draft: d, output: o, system, wide }: ChartsPanelPr
   const lim = limitValue(d);
   const chosen = o.chosenThicknessM;
   const sweep = o.sweep;
-  const tickX = (v: number) => (system === 'US' ? significant(v, 3) : fixed(v, 0));
 
   let surfaceLimit: { y: number; label: string; tone: 'heat' | 'cold' } | null = null;
   if (d.purpose === 'personnel' && lim !== null) surfaceLimit = { y: T(lim), label: `limit ${formatTemperature(lim, system).text}`, tone: 'heat' };
@@ -68,8 +67,6 @@ export function ChartsPanel({ draft: d, output: o, system, wide }: ChartsPanelPr
             series={[{ id: 'surface', points: sweep.map((p) => ({ x: x(p.thicknessM), y: T(p.surfaceTemperatureC) })), color: colors.text }]}
             limit={surfaceLimit}
             marker={chosenOnCurve ? { x: x(chosen), y: T(o.result.surfaceTemperatureC), label: `${chosenText}: ${formatTemperature(o.result.surfaceTemperatureC, system).text}` } : null}
-            formatX={tickX}
-            formatY={(v) => significant(v, 3)}
             summary={surfaceSummary}
             testID="qs-chart-surface"
           />
@@ -82,8 +79,6 @@ export function ChartsPanel({ draft: d, output: o, system, wide }: ChartsPanelPr
             series={[{ id: 'heat', points: sweep.map((p) => ({ x: x(p.thicknessM), y: H(p.heatFlow) })), color: colors.heatLine }]}
             limit={heatLimit}
             marker={chosenOnCurve ? { x: x(chosen), y: H(o.heatFlow), label: `${chosenText}: ${formatSignificant(q, Math.abs(o.heatFlow), system).text}` } : null}
-            formatX={tickX}
-            formatY={(v) => significant(v, 3)}
             summary={heatSummary}
             testID="qs-chart-heat"
           />
@@ -97,8 +92,6 @@ export function ChartsPanel({ draft: d, output: o, system, wide }: ChartsPanelPr
             guides={o.boundaries.slice(1, -1).map((b) => ({ x: x(b.positionM) }))}
             limit={d.purpose === 'personnel' ? surfaceLimit : null}
             marker={{ x: x(o.boundaries[o.boundaries.length - 1].positionM), y: T(o.result.surfaceTemperatureC), label: `surface ${formatTemperature(o.result.surfaceTemperatureC, system).text}` }}
-            formatX={tickX}
-            formatY={(v) => significant(v, 3)}
             summary={profileSummary}
             testID="qs-chart-profile"
           />
