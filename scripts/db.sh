@@ -5,6 +5,7 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 ROOT=$(pwd)
 DB_DIR=${DB_DIR:-$ROOT/.db}
+case "$DB_DIR" in /*) ;; *) DB_DIR=$ROOT/$DB_DIR ;; esac
 DB_PORT=${DB_PORT:-3307}
 DB_NAME=${DB_NAME:-lagline}
 DB_USER=${DB_USER:-lagline}

@@ -19,7 +19,6 @@ trap 'exit 130' INT TERM
 npx knex migrate:latest --knexfile knexfile.js
 node scripts/seed-once.js
 bash scripts/build-web.sh
-node scripts/print-demo.js
 
 node_modules/.bin/tsx server/index.ts &
 server_pid=$!

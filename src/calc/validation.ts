@@ -6,7 +6,7 @@ import * as yup from 'yup';
 
 import { fixed } from './format';
 import { limitKey, purposeAvailable, type Draft } from './quick-case';
-import { type Quantity, type UnitSystem, unitOf } from './units';
+import { type Quantity, type UnitSystem, formatInputNumber, unitOf } from './units';
 
 export type FieldErrors = Record<string, string>;
 
@@ -15,8 +15,8 @@ type Rule = { label: string; quantity: Quantity; min?: number; max?: number; exc
 function show(quantity: Quantity, system: UnitSystem, si: number): string {
   const u = unitOf(quantity, system);
   const v = u.fromSI(si);
-  const decimals = Math.abs(v) >= 100 || Number.isInteger(Math.round(v * 1000) / 1000) ? 0 : Math.abs(v) < 0.1 ? 3 : 1;
-  return `${fixed(v, decimals)}${u.suffix ? ` ${u.suffix}` : ''}`;
+  const text = Math.abs(v) >= 100 ? fixed(v, 0) : formatInputNumber(v, 3).replace('-', '−');
+  return `${text}${u.suffix ? ` ${u.suffix}` : ''}`;
 }
 
 function numberRule(r: Rule, system: UnitSystem) {
