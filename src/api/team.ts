@@ -20,12 +20,18 @@ export function useTeam(enabled = true) {
   });
 }
 
-function useTeamMutation<TInput, TData>(fn: (input: TInput) => ReturnType<typeof api.request<TData>>, alsoMail = false) {
+function useTeamMutation<TInput, TData>(
+  fn: (input: TInput) => ReturnType<typeof api.request<TData>>,
+  alsoMail = false,
+  /** Applies the confirmed change to the cached team at once, before the refetch lands. */
+  apply?: (team: TeamPayload, input: TInput) => TeamPayload,
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: fn,
-    onSuccess: (result) => {
+    onSuccess: (result, input) => {
       if (result.kind !== 'ok') return;
+      if (apply) queryClient.setQueryData<TeamPayload>(teamKeys.detail(), (old) => (old ? apply(old, input) : old));
       void queryClient.invalidateQueries({ queryKey: teamKeys.all });
       if (alsoMail) void queryClient.invalidateQueries({ queryKey: teamKeys.devMail() });
     },
@@ -37,17 +43,31 @@ export function useInviteMember() {
 }
 
 export function useRevokeInvitation() {
-  return useTeamMutation((id: Invitation['id']) => api.del<null>(`/team/invitations/${encodeURIComponent(String(id))}`));
+  return useTeamMutation(
+    (id: Invitation['id']) => api.del<null>(`/team/invitations/${encodeURIComponent(String(id))}`),
+    false,
+    (team, id) => ({ ...team, invitations: team.invitations.filter((i) => String(i.id) !== String(id)) }),
+  );
 }
 
 export function useChangeRole() {
-  return useTeamMutation((input: { userId: Member['userId']; role: Role }) =>
-    api.patch<Member>(`/team/members/${encodeURIComponent(String(input.userId))}`, { role: input.role }),
+  return useTeamMutation(
+    (input: { userId: Member['userId']; role: Role }) =>
+      api.patch<Member>(`/team/members/${encodeURIComponent(String(input.userId))}`, { role: input.role }),
+    false,
+    (team, input) => ({
+      ...team,
+      members: team.members.map((m) => (String(m.userId) === String(input.userId) ? { ...m, role: input.role } : m)),
+    }),
   );
 }
 
 export function useRemoveMember() {
-  return useTeamMutation((userId: Member['userId']) => api.del<null>(`/team/members/${encodeURIComponent(String(userId))}`));
+  return useTeamMutation(
+    (userId: Member['userId']) => api.del<null>(`/team/members/${encodeURIComponent(String(userId))}`),
+    false,
+    (team, userId) => ({ ...team, members: team.members.filter((m) => String(m.userId) !== String(userId)) }),
+  );
 }
 
 /** Mail caught by the local catcher (development only; owners only). */

@@ -2,6 +2,7 @@
  * What the results show, in display units and words: one place decides labels, precision and verdicts,
  * so the pinned summary, the results panel and the charts agree.
  */
+import { COLD_CONTACT_NOTE } from '../../shared/calc/burn';
 import type { CalcResult } from '../../shared/calc/types';
 
 import { type Formatted, formatHours, formatMoney, formatSignificant, formatTemperature, formatTemperatureDelta, formatThickness, significant } from './format';
@@ -121,7 +122,9 @@ export function present(d: Draft, out: Extract<LiveOutput, { kind: 'ok' }>, syst
   if (r.dewPointC !== undefined) details.push({ label: 'Dew point', value: formatTemperature(r.dewPointC, system), si: r.dewPointC, testID: 'qs-result-dewPoint' });
   r.interfaceTemperaturesC.forEach((t, i, all) => {
     if (i === all.length - 1) return;
-    details.push({ label: `Outer face of layer ${i + 1}`, value: formatTemperature(t, system), si: t, testID: `qs-result-interface-${i}` });
+    const at = out.boundaries[i + 1]?.positionM;
+    const label = all.length === out.case.layers.length ? `Outer face of layer ${i + 1}` : `Layer face ${at !== undefined ? formatThickness(at, system).text : ''} out`;
+    details.push({ label, value: formatTemperature(t, system), si: t, testID: `qs-result-interface-${i}` });
   });
   details.push({ label: 'Convection coefficient', value: formatSignificant('filmCoefficient', r.convectionCoefficientWPerM2K, system), si: r.convectionCoefficientWPerM2K, testID: 'qs-result-convection' });
   details.push({ label: 'Radiation coefficient', value: formatSignificant('filmCoefficient', r.radiationCoefficientWPerM2K, system), si: r.radiationCoefficientWPerM2K, testID: 'qs-result-radiation' });
@@ -162,9 +165,12 @@ export function present(d: Draft, out: Extract<LiveOutput, { kind: 'ok' }>, syst
     const mat = CONTACT_MATERIALS.find((c) => c.id === d.contactMaterial)?.label.toLowerCase() ?? d.contactMaterial;
     const secs = d.contactSeconds ?? 5;
     const above = r.burn.verdict === 'aboveThreshold';
+    const cold = r.surfaceTemperatureC < (d.airTemperatureC ?? 0) && r.surfaceTemperatureC < 10;
     burn = {
-      state: above ? 'fail' : 'pass',
-      text: above
+      state: above ? 'fail' : cold ? 'caution' : 'pass',
+      text: cold
+        ? `A cold surface: the hot-surface burn check does not apply. ${COLD_CONTACT_NOTE}`
+        : above
         ? `Above the burn threshold for ${secs} s contact with ${mat}: a touch can burn.`
         : `Below the burn threshold for ${secs} s contact with ${mat}.`,
       threshold: { label: 'Burn threshold used', value: formatTemperature(r.burn.thresholdC, system), si: r.burn.thresholdC, note: r.burn.source, testID: 'qs-result-burnThreshold' },

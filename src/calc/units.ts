@@ -4,6 +4,17 @@
  * system back and forth never drifts.
  */
 
+import {
+  JOULES_PER_BTU_IT,
+  JOULES_PER_KWH,
+  KELVIN_PER_FAHRENHEIT_DEGREE,
+  KILOGRAMS_PER_POUND,
+  METRES_PER_FOOT,
+  METRES_PER_INCH,
+  METRES_PER_SECOND_PER_MPH,
+  SECONDS_PER_HOUR,
+} from '../../shared/calc/units';
+
 export type UnitSystem = 'SI' | 'US';
 
 export type Quantity =
@@ -42,16 +53,6 @@ export type UnitDef = {
   fromSI: (x: number) => number;
 };
 
-import {
-  JOULES_PER_BTU_IT,
-  JOULES_PER_KWH,
-  KELVIN_PER_FAHRENHEIT_DEGREE,
-  KILOGRAMS_PER_POUND,
-  METRES_PER_FOOT,
-  METRES_PER_INCH,
-  METRES_PER_SECOND_PER_MPH,
-  SECONDS_PER_HOUR,
-} from '../../shared/calc/units';
 
 // Conversion constants come from shared/calc so the app, the server and the CLI agree to the last digit.
 const FT_M = METRES_PER_FOOT;

@@ -3,6 +3,7 @@
  * typing, live numbers and charts, the SI/US switch without drift, shared links, and the numbers on
  * screen against POST /api/v1/calculations for the same case.
  */
+import path from 'node:path';
 import type { Page } from 'playwright-core';
 
 import type { CalcCase, CalcOutcome } from '../../shared/calc/types';
@@ -11,6 +12,7 @@ import { defaultDraft, draftOptions, draftToCase, purposeAvailable, type Geometr
 import { formatInputNumber } from '../../src/calc/units';
 
 import {
+  SCREENSHOT_DIR,
   VIEWPORTS,
   assertNoCspViolations,
   assertOnlyLoopback,
@@ -185,6 +187,9 @@ describe.each([
       }
 
       await screenshot(p, `quick-sizing-${kind}-${purpose}-${tag}`);
+      // The page scrolls inside its own view, so the results and charts get pictures of their own.
+      await byTestId(p, 'qs-results').screenshot({ path: path.join(SCREENSHOT_DIR, `quick-sizing-${kind}-${purpose}-results-${tag}.png`) });
+      await byTestId(p, 'qs-charts').screenshot({ path: path.join(SCREENSHOT_DIR, `quick-sizing-${kind}-${purpose}-charts-${tag}.png`) });
       assertNoCspViolations(p);
     },
   );

@@ -20,7 +20,7 @@ export function AuthFrame({ title, intro, children, footer }: AuthFrameProps) {
           <View style={styles.markBand} />
         </View>
         <View>
-          <Text variant="title" weight="bold">
+          <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
             Lagline
           </Text>
           <Text variant="caption" tone="textMuted">

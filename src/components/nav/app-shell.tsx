@@ -35,7 +35,7 @@ export function AppShell({ teamName, userName, children }: AppShellProps) {
               <View style={styles.markBand} />
             </View>
             <View style={styles.railBrandText}>
-              <Text variant="title" weight="bold">
+              <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
                 Lagline
               </Text>
               {teamName ? (

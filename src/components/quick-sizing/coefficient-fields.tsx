@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { conductivityCoefficientsFromDisplay, conductivityCoefficientsToDisplay, formatInputNumber, parseNumber, type UnitSystem } from '../../calc/units';
@@ -28,17 +28,11 @@ export function CoefficientFields({ layer, system, value, onChange, errors, test
     if (si.some((c) => c === null)) return null;
     return conductivityCoefficientsToDisplay(system, si as number[]).map((c) => formatInputNumber(c, 6));
   };
-  const [texts, setTexts] = useState<string[]>(() => toTexts(value) ?? value.map(() => ''));
-  const last = useRef({ si: value, system });
-
-  useEffect(() => {
-    if (last.current.system !== system || !sameArr(last.current.si, value)) {
-      const t = toTexts(value);
-      if (t) setTexts(t);
-      last.current = { si: value, system };
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [value, system]);
+  const [shown, setShown] = useState(() => ({ si: value, system, texts: toTexts(value) ?? value.map(() => '') }));
+  if (shown.system !== system || !sameArr(shown.si, value)) {
+    setShown({ si: value, system, texts: toTexts(value) ?? shown.texts });
+  }
+  const texts = shown.texts;
 
   const k = system === 'US' ? 'Btu·in/(h·ft²·°F)' : 'W/(m·K)';
   const T = system === 'US' ? '°F' : '°C';
@@ -63,18 +57,16 @@ export function CoefficientFields({ layer, system, value, onChange, errors, test
               testID={testID ? `${testID}-c${j}` : undefined}
               onChangeText={(t) => {
                 const next = texts.map((x, i) => (i === j ? t : x));
-                setTexts(next);
                 const parsed = next.map(parseNumber);
                 let si: (number | null)[];
                 if (parsed.some((p) => p === null)) {
-                  // Keep the coefficients that still parse in SI; the empty one is reported by its field.
-                  const prev = last.current.si;
-                  si = parsed.map((p, i) => (p === null ? null : prev[i]));
-                  if (system === 'SI') si = parsed;
+                  // In SI each coefficient stands alone; in US units they depend on each other, so the
+                  // ones that still parse keep their previous SI values until every field is a number.
+                  si = system === 'SI' ? parsed : parsed.map((p, i) => (p === null ? null : shown.si[i]));
                 } else {
                   si = conductivityCoefficientsFromDisplay(system, parsed as number[]);
                 }
-                last.current = { si, system };
+                setShown({ si, system, texts: next });
                 onChange(si);
               }}
             />

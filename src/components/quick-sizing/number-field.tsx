@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useState } from 'react';
 
 import { type Quantity, type UnitSystem, formatInputNumber, parseNumber, unitOf } from '../../calc/units';
 import { TextField } from '../ui';
@@ -29,21 +29,16 @@ const same = (a: number | null, b: number | null) =>
 export function NumberField({ label, quantity, system, value, onChange, error, hint, unitPrefix, testID, disabled }: NumberFieldProps) {
   const unit = unitOf(quantity, system);
   const show = (si: number | null) => (si === null ? '' : formatInputNumber(unit.fromSI(si)));
-  const [text, setText] = useState(() => show(value));
-  const last = useRef<{ si: number | null; system: UnitSystem }>({ si: value, system });
-  const [notNumber, setNotNumber] = useState(false);
-
-  useEffect(() => {
-    const prev = last.current;
-    if (prev.system !== system || !same(prev.si, value)) {
-      // A unit switch or an outside change: show the SI value in this system. A field that holds
-      // text that is not a number keeps it, so the person can finish correcting it.
-      if (value !== null || prev.system === system) setText(show(value));
-      last.current = { si: value, system };
-      if (value !== null) setNotNumber(false);
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [value, system]);
+  // What the field shows, and the SI value and system it was drawn from. When the value changes from
+  // outside or the unit system switches, the text is redrawn from SI during render (no effect needed).
+  const [shown, setShown] = useState(() => ({ si: value, system, text: show(value) }));
+  if (shown.system !== system || !same(shown.si, value)) {
+    // A field that holds text that is not a number keeps it across a unit switch, so it can be corrected.
+    const keep = value === null && shown.system !== system;
+    setShown({ si: value, system, text: keep ? shown.text : show(value) });
+  }
+  const text = shown.text;
+  const notNumber = text.trim() !== '' && parseNumber(text) === null;
 
   const suffix = `${unitPrefix ?? ''}${unit.suffix}`;
   return (
@@ -59,11 +54,9 @@ export function NumberField({ label, quantity, system, value, onChange, error, h
       error={notNumber ? `Enter ${label.toLowerCase()} as a number.` : error}
       testID={testID}
       onChangeText={(t) => {
-        setText(t);
         const n = parseNumber(t);
         const si = n === null ? null : unit.toSI(n);
-        setNotNumber(t.trim() !== '' && n === null);
-        last.current = { si, system };
+        setShown({ si, system, text: t });
         onChange(si);
       }}
     />

@@ -60,7 +60,9 @@ export function ResultsPanel({ draft, output, system, pending, signedIn }: Resul
         {p.burn ? (
           <View style={styles.list}>
             <VerdictBadge state={p.burn.state} text={p.burn.text} testID="qs-result-burn" />
-            <ResultValue size="medium" label={p.burn.threshold.label} value={p.burn.threshold.value} si={p.burn.threshold.si} note={p.burn.threshold.note} testID={p.burn.threshold.testID} />
+            <View style={styles.grid}>
+              <ResultValue size="medium" label={p.burn.threshold.label} value={p.burn.threshold.value} si={p.burn.threshold.si} note={p.burn.threshold.note} testID={p.burn.threshold.testID} />
+            </View>
           </View>
         ) : null}
         <View style={styles.grid}>

@@ -23,7 +23,7 @@ export function SummaryBar({ draft, output, system }: { draft: Draft; output: Li
             <Text variant="caption" tone="textMuted" numberOfLines={1}>
               {s.short ?? s.label}
             </Text>
-            <Text variant="title" testID={`${s.testID}-pinned`} numberOfLines={1}>
+            <Text weight="bold" style={styles.value} testID={`${s.testID}-pinned`} numberOfLines={1}>
               {s.value.text}
             </Text>
           </View>
@@ -66,4 +66,5 @@ const styles = StyleSheet.create({
   verdict: { alignItems: 'center', width: 52 },
   row: { flex: 1, flexDirection: 'row', gap: spacing.md },
   item: { flex: 1, minWidth: 0 },
+  value: { fontSize: 18, lineHeight: 24 },
 });

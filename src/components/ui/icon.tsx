@@ -32,8 +32,6 @@ export function Icon({ name, size = 22, tone = 'text', label }: IconProps) {
       width={size}
       height={size}
       viewBox="0 0 24 24"
-      accessibilityElementsHidden={!label}
-      importantForAccessibility={label ? 'yes' : 'no-hide-descendants'}
       aria-hidden={label ? undefined : true}
       aria-label={label}
     >

@@ -21,7 +21,8 @@ const defaultWeight: Record<TextVariant, TextWeight> = {
   result: 'semibold',
 };
 
-const headingRole: Partial<Record<TextVariant, 'header'>> = { heading: 'header', title: 'header' };
+/** Headings get a level so a page keeps one h1 (the Screen title) and cards sit under it as h2. */
+const headingLevel: Partial<Record<TextVariant, number>> = { heading: 1, title: 2 };
 
 /**
  * Every piece of text in the app. Figures are always tabular, so numbers line up in lists and
@@ -37,7 +38,8 @@ export function Text({ variant = 'body', weight, tone = 'text', style, ...rest }
   };
   return (
     <RNText
-      role={headingRole[variant] === 'header' ? 'heading' : undefined}
+      role={headingLevel[variant] ? 'heading' : undefined}
+      aria-level={headingLevel[variant]}
       {...rest}
       style={[styles.base, base, style]}
     />
