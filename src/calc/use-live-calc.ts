@@ -15,10 +15,12 @@ export type LiveCalc = {
   output: LiveOutput;
   /** True between an edit and the calculation that follows it. */
   pending: boolean;
+  /** The draft the output belongs to (it lags the current draft while pending). */
+  forDraft: Draft;
 };
 
 export function useLiveCalc(draft: Draft, system: UnitSystem, delayMs = LIVE_CALC_DEBOUNCE_MS): LiveCalc {
-  const [output, setOutput] = useState<LiveOutput>(() => evaluateDraft(draft, system));
+  const [computed, setComputed] = useState<{ output: LiveOutput; forDraft: Draft }>(() => ({ output: evaluateDraft(draft, system), forDraft: draft }));
   const [pending, setPending] = useState(false);
   const first = useRef(true);
 
@@ -29,11 +31,11 @@ export function useLiveCalc(draft: Draft, system: UnitSystem, delayMs = LIVE_CAL
     }
     setPending(true);
     const timer = setTimeout(() => {
-      setOutput(evaluateDraft(draft, system));
+      setComputed({ output: evaluateDraft(draft, system), forDraft: draft });
       setPending(false);
     }, delayMs);
     return () => clearTimeout(timer);
   }, [draft, system, delayMs]);
 
-  return { output, pending };
+  return { output: computed.output, forDraft: computed.forDraft, pending: pending || computed.forDraft !== draft };
 }

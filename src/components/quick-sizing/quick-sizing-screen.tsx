@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import { StyleSheet, View, useWindowDimensions } from 'react-native';
 
 import { useSession } from '../../api/session';
@@ -19,16 +19,20 @@ import { SummaryBar } from './summary-bar';
 
 const SUMMARY_BAR_SPACE = 88;
 
+const noSubscription = () => () => undefined;
+const clientSnapshot = () => true;
+const serverSnapshot = () => false;
+
 /**
  * Quick sizing: one pipe, vessel or wall, sized or checked without a site. Everything runs in the
  * browser; the case lives in the page link (as SI), so a shared link opens the same case.
  */
 export function QuickSizingScreen() {
   const { width } = useWindowDimensions();
-  // The static page is rendered for a phone; the wide layout starts after hydration so both agree.
-  const [mounted, setMounted] = useState(false);
-  useEffect(() => setMounted(true), []);
-  const large = mounted && width >= breakpoints.large;
+  // The static page is rendered for a phone without a URL; the client's own view (wide layout, the
+  // link's case) takes over right after hydration, so server and client markup agree.
+  const hydrated = useSyncExternalStore(noSubscription, clientSnapshot, serverSnapshot);
+  const large = hydrated && width >= breakpoints.large;
   const session = useSession();
   const signedIn = Boolean(session.data?.user);
   const [override, setOverride] = useState<UnitSystem | null>(null);
@@ -40,25 +44,26 @@ export function QuickSizingScreen() {
   const [copied, setCopied] = useState(false);
   const lastQuery = useRef<string | null>(null);
 
-  // The link is read on the client only (static pages are rendered without a URL).
-  useEffect(() => {
-    if (typeof window === 'undefined') return;
+  // The link is read once, on the client (static pages are rendered without a URL).
+  if (hydrated && !linkRead && typeof window !== 'undefined') {
     const decoded = decodeCaseQuery(window.location.search);
     if (decoded.kind === 'ok') setDraft(draftFromCase(decoded.case, decoded.options));
     else if (decoded.kind === 'invalid') setLinkProblem(decoded.message);
     setLinkRead(true);
-  }, []);
+  }
 
-  const { output, pending } = useLiveCalc(draft, system);
+  const { output, pending, forDraft } = useLiveCalc(draft, system);
 
   // Keep the link in step with the case (replace, not push: typing should not fill the history).
   useEffect(() => {
-    if (!linkRead || typeof window === 'undefined' || output.kind === 'invalid') return;
+    // Only a result of the current draft may write the link (a shared link is not overwritten by the
+    // starting case while its own result is on its way).
+    if (!linkRead || typeof window === 'undefined' || output.kind === 'invalid' || forDraft !== draft) return;
     const query = encodeCaseQuery(output.case, draftOptions(draft));
     if (query === lastQuery.current) return;
     lastQuery.current = query;
     window.history.replaceState(window.history.state, '', `${window.location.pathname}?${query}`);
-  }, [output, draft, linkRead]);
+  }, [output, draft, forDraft, linkRead]);
 
   const onChange = useCallback((patch: Partial<Draft>) => {
     setCopied(false);
