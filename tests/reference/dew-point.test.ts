@@ -6,8 +6,8 @@ import { analyse, dewPointC } from '../../shared/calc';
 // doi:10.21105/joss.01137), which solves the ASHRAE Handbook—Fundamentals (2017) ch. 1 saturation-pressure
 // equations for the dew point. Magnus with the Alduchov & Eskridge constants differs from the ASHRAE
 // formulation by under ~0.35 % in vapour pressure over −40…50 °C, i.e. a few hundredths of a kelvin, so
-// the tolerance is 0.05 K. Only dew points above 0 °C are compared, because psychrolib switches to
-// saturation over ice below 0 °C while the contract's Magnus form is over water.
+// the tolerance is 0.05 K. Only dew points above 0 °C are compared, because psychrolib takes
+// the vapour pressure over frozen water below 0 °C, whereas our Magnus formula is taken over liquid water.
 psychrolib.SetUnitSystem(psychrolib.SI);
 
 describe('dew point, Magnus (Alduchov & Eskridge 1996), against psychrolib', () => {

@@ -12,8 +12,8 @@ const designCase: CalcCase = {
 
 describe('insulated steam pipe', () => {
   it('when the contract example (4" pipe at 250 °C, ε 0.1, surface ≤ 60 °C) is solved and rounded, then it reproduces the independent model', () => {
-    // Source: Lagline product design, DESIGN.md §6 "calculation contract", example result computed by an
-    // independent model: 98.2 W/m, 56.5 °C, h_c 4.31, h_r 0.72, t* 0.052 m, rounded 0.06 m, dew point 21.4 °C.
+    // Source: the worked example of Lagline's public calculation contract (README, "The contract"), whose
+    // numbers were computed by an independent model: 98.2 W/m, 56.5 °C, h_c 4.31, h_r 0.72, t* 0.052 m, rounded 0.06 m, dew point 21.4 °C.
     // Three significant figures; tolerance 2 % (0.5 K on temperatures) allows for a different air table.
     const r = analyse(designCase);
     expect(Math.abs((r.heatLossWPerM as number) / 98.2 - 1)).toBeLessThan(0.02);

@@ -5,7 +5,7 @@
  * @remarks
  * Each material stores the specification's table points (k at mean temperature, converted to SI) beside the
  * polynomial fitted to them, so any screen can show the published numbers and how closely the curve follows
- * them. As usual practice (DESIGN §7), the mean-temperature values are used as point values of k(T), and the
+ * them. As is usual practice, the mean-temperature values are used as point values of k(T), and the
  * layer calculation integrates k over each layer's span (ASTM C680).
  *
  * **Provenance.** The table values below are *as recalled from memory* of the specifications named in each
