@@ -1,7 +1,7 @@
 import type { Config } from 'jest';
 
 const tsJest: Config['transform'] = {
-  '^.+\\.tsx?$': ['ts-jest', { isolatedModules: true, diagnostics: false }],
+  '^.+\\.tsx?$': ['ts-jest', { diagnostics: false }],
 };
 
 const config: Config = {
