@@ -2,6 +2,7 @@
  * npm run bench — speed figures for the calculation core and the command-line entry point.
  *   analyse / solve in process: cases per second, median and p95 per case [ms]
  *   calc CLI wall time for 10,000 analyses and 1,000 thickness solves, process start included [s]
+ *   API health latency while a 10,000-case batch runs [ms]
  *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
  * `--json` prints one JSON object of named figures instead of the table.
  */
@@ -70,11 +71,26 @@ function firstPaint(): { firstPaintMs: number | null; firstContentfulPaintMs: nu
   }
 }
 
+function apiUnderLoad(): Record<string, unknown> | null {
+  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [path.join(root, 'scripts', 'bench-api.ts')], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: 'test' },
+    timeout: 120_000,
+  });
+  try {
+    const lines = r.stdout.toString().trim().split('\n');
+    return JSON.parse(lines[lines.length - 1]);
+  } catch {
+    return { note: `failed: ${r.stderr.toString().slice(0, 300)}` };
+  }
+}
+
 const figures = {
   analyse: timeEach('analyse', 5000, 1),
   solve: timeEach('solve', 500, 2),
   cliAnalyse10000: cliWall('analyse', 10_000, 3),
   cliSolve1000: cliWall('solve', 1000, 4),
+  apiHealthDuring10000Batch: apiUnderLoad(),
   quickSizingPaint: process.argv.includes('--no-browser') ? null : firstPaint(),
 };
 
@@ -88,6 +104,8 @@ if (asJson) {
   console.log(`solve    ${s.casesPerSecond} cases/s   median ${s.medianMs} ms   p95 ${s.p95Ms} ms   (${s.cases} cases, ${s.errors} errors)`);
   console.log(`calc CLI 10,000 analyses: ${figures.cliAnalyse10000.wallSeconds} s wall (target ≤ 2.5 s)`);
   console.log(`calc CLI 1,000 solves:    ${figures.cliSolve1000.wallSeconds} s wall (target ≤ 2.5 s)`);
+  const h = figures.apiHealthDuring10000Batch;
+  if (h) console.log(`API: 10,000-case batch ${h.batchSeconds ?? '–'} s; health during it median ${h.healthMedianMs ?? '–'} ms, max ${h.healthMaxMs ?? '–'} ms over ${h.healthSamples ?? 0} requests (target < 200 ms)${h.note ? ' — ' + h.note : ''}`);
   const p = figures.quickSizingPaint;
   if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
 }
