@@ -6,7 +6,7 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 
 need=()
-[ -x /usr/sbin/mariadbd ] || need+=(mariadb-server)
+{ [ -x /usr/sbin/mariadbd ] && command -v mariadb-admin >/dev/null && command -v mariadb-install-db >/dev/null; } || need+=(mariadb-server mariadb-client)
 if [ "${1:-}" = "--with-browser" ] && [ ! -x /usr/bin/chromium ]; then need+=(chromium); fi
 if [ ${#need[@]} -gt 0 ]; then
   echo "Installing from Debian's packages: ${need[*]}"
