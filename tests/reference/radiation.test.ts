@@ -8,8 +8,9 @@ describe('radiation, Stefan–Boltzmann', () => {
   });
 
   it('when a 70 mm steam pipe at 200 °C (ε 0.8) faces 25 °C walls, then emissive power is 2270 W/m² and irradiation 447 W/m²', () => {
-    // Source: Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Example 1.2 (from memory):
-    // E = 2270 W/m², G = 447 W/m². Three significant figures → 0.5 %.
+    // Source: Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Example 1.2 (D = 70 mm,
+    // Ts = 473 K, ε = 0.8, Tsur = 298 K; inputs confirmed by the course code below): E = 2270 W/m²,
+    // G = 447 W/m² (these two printed values still from memory). Three significant figures → 0.5 %.
     const E = radiativeHeatFlux(0.8, 473, 0);
     const Girr = radiativeHeatFlux(1, 298, 0);
     expect(Math.abs(E / 2270 - 1)).toBeLessThan(0.005);
@@ -17,10 +18,16 @@ describe('radiation, Stefan–Boltzmann', () => {
   });
 
   it('when the same pipe loses heat by radiation, then q′_rad = 421 W/m', () => {
-    // Source: Incropera & DeWitt, 6th ed., Example 1.2 (from memory): q′ = 577 + 421 = 998 W/m, the radiative
-    // part 421 W/m. Three significant figures → 0.5 %.
+    // Source: Incropera & DeWitt, 6th ed., Example 1.2: q′ = 577 + 421 = 998 W/m, the radiative part 421 W/m,
+    // as reproduced by P. M. Barral, "TA216 — Tecnología de Calor Avanzada — Apps" (course software,
+    // github.com/PabloMBarral/apps), core/heat_transfer/radiation.py example "Caño de vapor desnudo…
+    // (basado en Incropera 1.2)" — ε 0.8, 473.15 K to 298.15 K, A = π·0.07 m²/m, "El libro: 421 W por metro
+    // (más 577 W por convección)" — and tests/test_radiation.py. Three significant figures → 0.5 %.
     const q = radiativeHeatFlux(0.8, 473, 298) * Math.PI * 0.07;
     expect(Math.abs(q / 421 - 1)).toBeLessThan(0.005);
+    // The convective part, h·πD·(Ts − T∞) with the example's h = 15 W/(m²·K) (from memory; 577 W/m over
+    // π·0.07·175 K gives 15.0), closes the published total of 998 W/m.
+    expect(Math.abs((q + 15 * Math.PI * 0.07 * (473 - 298)) / 998 - 1)).toBeLessThan(0.005);
   });
 
   it('when surface and surroundings are at the same temperature, then h_r is the derivative 4εσT³', () => {
