@@ -30,6 +30,11 @@ export function MethodPanel({ result }: { result: CalcResult | null }) {
           • Conductivities are specification values for generic material types; real products, ageing, moisture, gaps and damaged jackets change them. Fittings,
           supports and valves lose more heat than straight pipe.
         </Text>
+        <Text>
+          • Frost protection: the time to 0 °C counts the heat stored in the water and the pipe steel and the outer air film, so it is longer than the
+          handbook estimate that leaves them out; it ignores freezing itself (latent heat), wind gusts and a sky colder than the air. Insulation only delays
+          freezing of standing water; trace heating or flow prevents it.
+        </Text>
         <Text>• Outdoors, a clear night sky can be much colder than the air: cold surfaces may run below the dew point even when this says otherwise.</Text>
       </View>
       {result && result.warnings.length > 0 ? (
