@@ -1,5 +1,9 @@
 /** Shapes of the API's answers (see docs/api.md). */
 
+import type { DesignBases } from '../../shared/schemas/sites';
+
+export type { DesignBases };
+
 export type Role = 'owner' | 'engineer' | 'safety' | 'contractor' | 'viewer';
 
 export const ROLES: readonly Role[] = ['owner', 'engineer', 'safety', 'contractor', 'viewer'];
@@ -79,6 +83,12 @@ export interface Site {
   description?: string | null;
   createdAt?: string;
   updatedAt?: string;
+}
+
+/** One site as GET /sites/:id answers it; owners and engineers also get who was invited to it. */
+export interface SiteDetail extends Site {
+  designBases: DesignBases;
+  members?: { userId: number | string; name: string; email: string }[];
 }
 
 export interface CaughtMail {

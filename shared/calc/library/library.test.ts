@@ -29,8 +29,25 @@ describe('finishes', () => {
       expect(f.emissivityRange[1]).toBeLessThanOrEqual(1);
       expect(f.emissivity).toBeGreaterThanOrEqual(f.emissivityRange[0]);
       expect(f.emissivity).toBeLessThanOrEqual(f.emissivityRange[1]);
-      expect(f.source).toMatch(/from memory/);
     }
+  });
+
+  it('when any finish is listed, then its source says whether its numbers were confirmed or are from memory', () => {
+    for (const f of FINISHES) {
+      expect(f.source).toMatch(/confirmed against|from memory/);
+      if (!/confirmed against/.test(f.source)) expect(f.source).toMatch(/not confirmed/);
+    }
+  });
+
+  it('when the aluminium finishes are read, then their ends match the published total normal emissivities', () => {
+    // Source: Hottel's table (McAdams, Heat Transmission, 3rd ed.), as reproduced in open emissivity tables:
+    // aluminium, highly polished plate 0.039–0.057, commercial sheet 0.09; oxidised at 600 °C 0.11–0.19,
+    // heavily oxidised 0.20–0.31. Rounded to two decimals.
+    expect(finishById('aluminium-polished').emissivityRange).toEqual([0.04, 0.09]);
+    expect(finishById('aluminium-oxidised').emissivityRange[1]).toBe(0.31);
+    // Galvanised sheet iron: fairly bright 0.228, grey oxidised 0.276 (same table).
+    expect(finishById('galvanised-steel-new').emissivity).toBe(0.23);
+    expect(finishEmissivityForBasis('galvanised-steel-weathered', 'touchSafety')).toBe(0.28);
   });
 
   it('when a touch-safety basis is used, then the lowest credible emissivity is taken', () => {

@@ -12,6 +12,8 @@ export const BOTTOM_BAR_HEIGHT = 64;
 export interface AppShellProps {
   teamName?: string;
   userName?: string;
+  /** Show the bottom bar / side rail; off for a visitor who is not signed in. */
+  navigation?: boolean;
   children: React.ReactNode;
 }
 
@@ -20,74 +22,41 @@ export interface AppShellProps {
  * Both are plain links in a landmark, so Tab and Enter reach every destination. (Link asChild hands
  * its child's style straight to the DOM on web, so those styles are flattened objects.)
  */
-export function AppShell({ teamName, userName, children }: AppShellProps) {
+export function AppShell({ teamName, userName, navigation = true, children }: AppShellProps) {
   const { width } = useWindowDimensions();
   const wide = width >= breakpoints.wide;
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
 
-  if (wide) {
-    return (
-      <View style={styles.wideRoot}>
-        <View role="navigation" aria-label="Main" style={[styles.rail, { paddingTop: insets.top + spacing.xl }]}>
-          <View style={styles.railBrand}>
-            <View style={styles.mark} aria-hidden>
-              <View style={styles.markBand} />
-            </View>
-            <View style={styles.railBrandText}>
-              <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
-                Lagline
-              </Text>
-              {teamName ? (
-                <Text variant="caption" tone="textMuted" numberOfLines={1}>
-                  {teamName}
-                </Text>
-              ) : null}
-            </View>
-          </View>
-          <View style={styles.railItems}>
-            {destinations.map((d) => {
-              const active = isActive(pathname, d.href);
-              return (
-                <Link key={d.href} href={d.href} asChild>
-                  <Pressable
-                    role="link"
-                    aria-current={active ? 'page' : undefined}
-                    style={StyleSheet.flatten([styles.railItem, active && styles.railItemActive])}
-                  >
-                    <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
-                    <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>
-                      {d.label}
-                    </Text>
-                  </Pressable>
-                </Link>
-              );
-            })}
-          </View>
-          {userName ? (
-            <Text variant="caption" tone="textMuted" style={styles.railUser} numberOfLines={1}>
-              {`Signed in as ${userName}`}
+  const rail = (
+    <View role="navigation" aria-label="Main" style={[styles.rail, { paddingTop: insets.top + spacing.xl }]}>
+      <View style={styles.railBrand}>
+        <View style={styles.mark} aria-hidden>
+          <View style={styles.markBand} />
+        </View>
+        <View style={styles.railBrandText}>
+          <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
+            Lagline
+          </Text>
+          {teamName ? (
+            <Text variant="caption" tone="textMuted" numberOfLines={1}>
+              {teamName}
             </Text>
           ) : null}
         </View>
-        <View style={styles.wideContent}>{children}</View>
       </View>
-    );
-  }
-
-  return (
-    <View style={styles.phoneRoot}>
-      <View style={styles.phoneContent}>{children}</View>
-      <View role="navigation" aria-label="Main" style={[styles.bar, { paddingBottom: insets.bottom }]}>
+      <View style={styles.railItems}>
         {destinations.map((d) => {
           const active = isActive(pathname, d.href);
           return (
             <Link key={d.href} href={d.href} asChild>
-              <Pressable role="link" aria-current={active ? 'page' : undefined} style={styles.barItem}>
-                <View style={[styles.barPill, active && styles.barPillActive]}>
-                  <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
-                </View>
-                <Text variant="caption" weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'} numberOfLines={1}>
+              <Pressable
+                role="link"
+                aria-current={active ? 'page' : undefined}
+                style={StyleSheet.flatten([styles.railItem, active && styles.railItemActive])}
+              >
+                <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+                <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>
                   {d.label}
                 </Text>
               </Pressable>
@@ -95,6 +64,41 @@ export function AppShell({ teamName, userName, children }: AppShellProps) {
           );
         })}
       </View>
+      {userName ? (
+        <Text variant="caption" tone="textMuted" style={styles.railUser} numberOfLines={1}>
+          {`Signed in as ${userName}`}
+        </Text>
+      ) : null}
+    </View>
+  );
+
+  const bar = (
+    <View role="navigation" aria-label="Main" style={[styles.bar, { paddingBottom: insets.bottom }]}>
+      {destinations.map((d) => {
+        const active = isActive(pathname, d.href);
+        return (
+          <Link key={d.href} href={d.href} asChild>
+            <Pressable role="link" aria-current={active ? 'page' : undefined} style={styles.barItem}>
+              <View style={[styles.barPill, active && styles.barPillActive]}>
+                <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+              </View>
+              <Text variant="caption" weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'} numberOfLines={1}>
+                {d.label}
+              </Text>
+            </Pressable>
+          </Link>
+        );
+      })}
+    </View>
+  );
+
+  // The page keeps its place among the siblings whether or not the navigation shows, so it is not
+  // remounted (and loses nothing typed) when the session arrives or the window crosses the breakpoint.
+  return (
+    <View style={wide ? styles.wideRoot : styles.phoneRoot}>
+      {navigation && wide ? rail : null}
+      <View style={wide ? styles.wideContent : styles.phoneContent}>{children}</View>
+      {navigation && !wide ? bar : null}
     </View>
   );
 }

@@ -1,9 +1,10 @@
+import { Link } from 'expo-router';
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 
+import { can } from '../../../shared/schemas/permissions';
 import { useSession } from '../../api/session';
 import { useSites } from '../../api/sites';
-import type { Role } from '../../api/types';
 import { colors, radius, spacing } from '../../theme';
 import { formatDate } from '../common/format';
 import { Loading, QueryError } from '../common/query-state';
@@ -11,13 +12,11 @@ import { Button, EmptyState, Icon, Screen, Text } from '../ui';
 
 import { CreateSiteForm } from './create-site-form';
 
-const CAN_CREATE: readonly Role[] = ['owner', 'engineer'];
-
 export function SitesScreen({ bottomInset = 0 }: { bottomInset?: number }) {
   const session = useSession();
   const sites = useSites();
   const [creating, setCreating] = useState(false);
-  const canCreate = CAN_CREATE.includes(session.data?.role as Role);
+  const canCreate = can(session.data?.role, 'site.create');
 
   return (
     <Screen title="Sites" intro="Plant areas and projects, each with its line list and design bases." bottomInset={bottomInset}>
@@ -34,7 +33,13 @@ export function SitesScreen({ bottomInset = 0 }: { bottomInset?: number }) {
             message="A site is a plant area or project. It holds the line list of pipes and vessels, and the design bases for touch safety, energy and condensation that sizing works from."
             actionLabel={canCreate ? 'Create a site' : undefined}
             onAction={canCreate ? () => setCreating(true) : undefined}
-            note={canCreate ? undefined : 'An owner or engineer on your team can create the first site.'}
+            note={
+              canCreate
+                ? undefined
+                : session.data?.role === 'contractor'
+                  ? 'You see the sites you are invited to; an owner or engineer can invite you to one.'
+                  : 'An owner or engineer on your team can create the first site.'
+            }
             testID="sites-empty"
           />
         )
@@ -43,21 +48,25 @@ export function SitesScreen({ bottomInset = 0 }: { bottomInset?: number }) {
           {canCreate && !creating ? <Button label="Create a site" icon="plus" variant="secondary" onPress={() => setCreating(true)} /> : null}
           <View role="list" style={styles.list} testID="sites-list">
             {sites.data.map((site) => (
-              <View key={String(site.id)} role="listitem" style={styles.row}>
-                <Icon name="sites" tone="heat" />
-                <View style={styles.rowText}>
-                  <Text weight="semibold">{site.name}</Text>
-                  {site.description ? (
-                    <Text variant="caption" tone="textMuted" numberOfLines={2}>
-                      {site.description}
-                    </Text>
-                  ) : null}
-                </View>
-                {site.createdAt ? (
-                  <Text variant="caption" tone="textMuted">
-                    {formatDate(site.createdAt)}
-                  </Text>
-                ) : null}
+              <View key={String(site.id)} role="listitem">
+                <Link href={`/sites/${encodeURIComponent(String(site.id))}`} asChild>
+                  <Pressable role="link" style={styles.row} testID={`site-${site.id}`}>
+                    <Icon name="sites" tone="heat" />
+                    <View style={styles.rowText}>
+                      <Text weight="semibold">{site.name}</Text>
+                      {site.description ? (
+                        <Text variant="caption" tone="textMuted" numberOfLines={2}>
+                          {site.description}
+                        </Text>
+                      ) : null}
+                    </View>
+                    {site.createdAt ? (
+                      <Text variant="caption" tone="textMuted">
+                        {`Created ${formatDate(site.createdAt)}`}
+                      </Text>
+                    ) : null}
+                  </Pressable>
+                </Link>
               </View>
             ))}
           </View>

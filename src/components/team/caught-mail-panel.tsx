@@ -1,3 +1,4 @@
+import type { Href } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { ApiProblemError } from '../../api/client';
@@ -5,7 +6,27 @@ import { useDevMail } from '../../api/team';
 import { colors, radius, spacing } from '../../theme';
 import { formatDateTime } from '../common/format';
 import { Loading, QueryError } from '../common/query-state';
-import { Button, Card, Text } from '../ui';
+import { Button, Card, Text, TextLink } from '../ui';
+
+import { splitMailLinks } from './mail-links';
+
+/** The mail's text with this app's own links clickable (same tab); every other address stays text. */
+function MailBody({ text }: { text: string }) {
+  const origin = typeof window !== 'undefined' && window.location ? window.location.origin : '';
+  return (
+    <Text variant="caption" selectable>
+      {splitMailLinks(text, origin).map((part, i) =>
+        part.kind === 'link' ? (
+          <TextLink key={i} href={part.href as Href} variant="caption">
+            {part.text}
+          </TextLink>
+        ) : (
+          part.text
+        ),
+      )}
+    </Text>
+  );
+}
 
 /**
  * Development only: the messages the local mail catcher received, so invitations and reset links can
@@ -29,9 +50,7 @@ export function CaughtMailPanel() {
             <View key={String(m.id)} role="listitem" style={styles.message}>
               <Text weight="semibold">{m.subject}</Text>
               <Text variant="caption" tone="textMuted">{`To ${m.to} · ${formatDateTime(m.receivedAt)}`}</Text>
-              <Text variant="caption" selectable>
-                {m.text}
-              </Text>
+              <MailBody text={m.text} />
             </View>
           ))}
         </View>

@@ -1,6 +1,8 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
-import { useSession } from '../../api/session';
+import { useQueryClient } from '@tanstack/react-query';
+
+import { sessionKeys, useSession } from '../../api/session';
 import { useTeam } from '../../api/team';
 import { breakpoints, spacing } from '../../theme';
 import { Loading, QueryError } from '../common/query-state';
@@ -14,6 +16,7 @@ import { MemberList } from './member-list';
 export function TeamScreen({ bottomInset = 0 }: { bottomInset?: number }) {
   const session = useSession();
   const team = useTeam();
+  const queryClient = useQueryClient();
   const { width } = useWindowDimensions();
   const isOwner = session.data?.role === 'owner';
   const twoColumns = width >= breakpoints.large;
@@ -27,7 +30,13 @@ export function TeamScreen({ bottomInset = 0 }: { bottomInset?: number }) {
       ) : (
         <View style={[styles.columns, twoColumns && styles.columnsWide]}>
           <View style={[styles.column, twoColumns && styles.main]}>
-            <MemberList members={team.data.members} canManage={isOwner} selfId={session.data?.user?.id} />
+            <MemberList
+              members={team.data.members}
+              canManage={isOwner}
+              selfId={session.data?.user?.id}
+              // Leaving the team ends this session's access; the fresh session sends the browser to sign-in.
+              onRemoved={(self) => (self ? void queryClient.invalidateQueries({ queryKey: sessionKeys.all }) : undefined)}
+            />
             <InvitationList invitations={team.data.invitations} canManage={isOwner} />
           </View>
           {isOwner ? (

@@ -1,0 +1,166 @@
+import { ValidationError } from 'yup';
+
+import { sitePatchSchema, type SitePatchInput } from '../../../shared/schemas/sites';
+import type { DesignBases, SiteDetail } from '../../api/types';
+import { formatInputNumber, fromDisplay, parseNumber, toDisplay, unitOf, type Quantity, type UnitSystem } from '../../calc/units';
+
+export type BasisKey = 'touch' | 'energy' | 'condensation';
+
+export interface BasisField {
+  key: string;
+  label: string;
+  /** Numbers carry a quantity (shown in the user's units); fields without one are text. */
+  quantity?: Quantity;
+  required?: boolean;
+}
+
+export interface BasisSpec {
+  key: BasisKey;
+  title: string;
+  /** What the basis is for, in one sentence. */
+  purpose: string;
+  fields: readonly BasisField[];
+}
+
+/** The three design bases of a site, in the order a practitioner reads them. */
+export const BASES: readonly BasisSpec[] = [
+  {
+    key: 'touch',
+    title: 'Touch safety',
+    purpose: 'Hottest credible air, still air and the worst emissivity: personnel protection is sized against these.',
+    fields: [
+      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
+      { key: 'radiantTemperatureC', label: 'Radiant temperature', quantity: 'temperature' },
+      { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' },
+      { key: 'surfaceEmissivity', label: 'Surface emissivity', quantity: 'ratio' },
+      { key: 'contactSeconds', label: 'Contact time', quantity: 'seconds' },
+    ],
+  },
+  {
+    key: 'energy',
+    title: 'Energy',
+    purpose: 'Annual-average air and wind with the economics that heat conservation and the totals use.',
+    fields: [
+      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
+      { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' },
+      { key: 'operatingHoursPerYear', label: 'Operating hours a year', quantity: 'hours' },
+      { key: 'energyPricePerKWh', label: 'Energy price', quantity: 'pricePerEnergy' },
+      { key: 'currency', label: 'Currency' },
+      { key: 'heatSourceEfficiency', label: 'Heat-source efficiency', quantity: 'fraction' },
+      { key: 'co2KgPerKWh', label: 'CO₂ factor', quantity: 'co2Factor' },
+      { key: 'co2Basis', label: 'Basis of the CO₂ factor' },
+    ],
+  },
+  {
+    key: 'condensation',
+    title: 'Condensation',
+    purpose: 'Air and humidity around cold lines; their surfaces must stay above the dew point by the margin.',
+    fields: [
+      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
+      { key: 'relativeHumidityPct', label: 'Relative humidity', quantity: 'percent', required: true },
+      { key: 'marginK', label: 'Margin above dew point', quantity: 'temperatureDelta' },
+    ],
+  },
+];
+
+/** Flat form field names: Formik reads dots as nesting, so "touch_airTemperatureC". */
+export const fieldName = (basis: BasisKey, key: string) => `${basis}_${key}`;
+
+export type SiteFormValues = Record<string, string>;
+
+/** Which parts of a site a role may change: everything, or the touch-safety basis alone. */
+export type EditScope = 'all' | 'touch';
+
+const basisValue = (bases: DesignBases, basis: BasisKey, key: string): unknown =>
+  (bases[basis] as Record<string, unknown> | undefined)?.[key];
+
+/**
+ * A stored value as the user reads it: number in their units with the unit's suffix, or text. A
+ * price carries its basis's currency ("0.045 EUR/kWh").
+ */
+export function displayValue(field: BasisField, raw: unknown, system: UnitSystem, currency?: unknown): string | null {
+  if (raw === undefined || raw === null || raw === '') return null;
+  if (!field.quantity || typeof raw !== 'number') return String(raw);
+  const unit = unitOf(field.quantity, system);
+  const text = formatInputNumber(toDisplay(field.quantity, system, raw), 4);
+  const prefix = field.quantity === 'pricePerEnergy' && typeof currency === 'string' && currency ? currency : '';
+  return unit.suffix ? `${text} ${prefix}${unit.suffix}` : text;
+}
+
+export function siteToForm(site: Pick<SiteDetail, 'name' | 'description' | 'designBases'>, system: UnitSystem): SiteFormValues {
+  const values: SiteFormValues = { name: site.name, description: site.description ?? '' };
+  for (const b of BASES) {
+    for (const f of b.fields) {
+      const raw = basisValue(site.designBases ?? {}, b.key, f.key);
+      values[fieldName(b.key, f.key)] =
+        raw === undefined || raw === null ? '' : f.quantity && typeof raw === 'number' ? formatInputNumber(toDisplay(f.quantity, system, raw)) : String(raw);
+    }
+  }
+  return values;
+}
+
+/** Server and schema paths (designBases.touch.airTemperatureC) → the form's field names. */
+export function formFieldOf(path: string): string {
+  const m = /^designBases\.(touch|energy|condensation)\.(\w+)$/.exec(path);
+  return m ? fieldName(m[1] as BasisKey, m[2]) : path;
+}
+
+// Conversions back from US units leave float noise; 12 significant figures keep every typed digit.
+const clean = (x: number) => Number(x.toPrecision(12));
+
+/**
+ * Turns the form into the PATCH body, in SI. A value the user left as it was keeps its stored SI
+ * number exactly (a unit round trip would otherwise nudge it). Errors are keyed by form field name.
+ */
+export function formToPatch(
+  values: SiteFormValues,
+  initial: SiteFormValues,
+  stored: DesignBases,
+  system: UnitSystem,
+  scope: EditScope,
+): { patch: SitePatchInput | null; errors: Record<string, string> } {
+  const errors: Record<string, string> = {};
+  const designBases: Record<string, Record<string, unknown>> = {};
+  for (const b of BASES) {
+    if (scope === 'touch' && b.key !== 'touch') continue;
+    const out: Record<string, unknown> = {};
+    const touched = b.fields.some((f) => values[fieldName(b.key, f.key)].trim() !== '');
+    if (!touched && basisValue(stored, b.key, 'airTemperatureC') === undefined) continue;
+    for (const f of b.fields) {
+      const name = fieldName(b.key, f.key);
+      const text = (values[name] ?? '').trim();
+      if (text === '') {
+        if (f.required) errors[name] = `${b.title}: ${f.label.toLowerCase()} is required`;
+        continue;
+      }
+      const storedValue = basisValue(stored, b.key, f.key);
+      if (text === (initial[name] ?? '').trim() && storedValue !== undefined) {
+        out[f.key] = storedValue;
+        continue;
+      }
+      if (!f.quantity) {
+        out[f.key] = text;
+        continue;
+      }
+      const n = parseNumber(text);
+      if (n === null) errors[name] = `${b.title}: ${f.label.toLowerCase()} must be a number`;
+      else out[f.key] = clean(fromDisplay(f.quantity, system, n));
+    }
+    designBases[b.key] = out;
+  }
+  const patch: Record<string, unknown> = { designBases };
+  if (scope === 'all') {
+    patch.name = values.name.trim();
+    patch.description = values.description.trim();
+  }
+  try {
+    sitePatchSchema.validateSync(patch, { abortEarly: false });
+  } catch (e) {
+    if (!(e instanceof ValidationError)) throw e;
+    for (const item of e.inner.length > 0 ? e.inner : [e]) {
+      const name = formFieldOf(item.path ?? '');
+      if (name && !(name in errors)) errors[name] = item.message;
+    }
+  }
+  return Object.keys(errors).length > 0 ? { patch: null, errors } : { patch: patch as SitePatchInput, errors };
+}

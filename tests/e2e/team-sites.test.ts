@@ -1,0 +1,302 @@
+/**
+ * Sites and the team in a real browser, against the seeded demo team: an owner opens a site, edits
+ * it and deletes another, removes a member (and is refused removing the last owner), follows a caught
+ * mail's link; a safety officer edits the touch-safety basis alone; a viewer sees no edit controls;
+ * a site's address survives a hard reload; quick sizing sits inside the navigation once signed in.
+ * Once on a phone (390×844) and once on a wide screen (1440×900), each against its own fresh team.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+
+import {
+  assertNoCspViolations,
+  assertNoPageErrors,
+  assertOnlyLoopback,
+  assertWebAppBuilt,
+  gotoApp,
+  openBrowser,
+  screenshot,
+  startTestServer,
+  VIEWPORTS,
+  viewportTag,
+  type OpenedBrowser,
+  type TestServer,
+} from './harness';
+
+jest.setTimeout(180_000);
+
+type DemoCredentials = { teamName: string; password: string; users: { role: string; name: string; email: string }[] };
+const demo = JSON.parse(fs.readFileSync(path.resolve(__dirname, '../../seeds/demo-credentials.json'), 'utf8')) as DemoCredentials;
+const user = (role: string) => {
+  const u = demo.users.find((x) => x.role === role);
+  if (!u) throw new Error(`No demo ${role}`);
+  return u;
+};
+
+async function fill(page: Page, testId: string, value: string) {
+  const input = page.getByTestId(testId);
+  await input.click();
+  await input.fill(value);
+}
+
+/**
+ * Signs out by forgetting the cookie. The page is left first: a request still in flight from the old
+ * page would otherwise bring the session cookie back with its answer.
+ */
+async function forgetSession(page: Page) {
+  await page.waitForLoadState('networkidle');
+  await page.goto('about:blank');
+  await page.context().clearCookies();
+}
+
+async function signInAs(page: Page, server: TestServer, role: string) {
+  await forgetSession(page);
+  await gotoApp(page, `${server.url}/`);
+  await fill(page, 'signin-email', user(role).email);
+  await fill(page, 'signin-password', demo.password);
+  await page.getByTestId('signin-submit').click();
+  await page.waitForURL('**/sites');
+  await page.getByTestId('sites-list').waitFor();
+}
+
+async function siteId(server: TestServer, name: string): Promise<number> {
+  const row = (await server.db('sites').where({ name }).first('id')) as { id: number } | undefined;
+  if (!row) throw new Error(`No site ${name}`);
+  return row.id;
+}
+
+describe.each([
+  ['phone', VIEWPORTS.phone],
+  ['wide', VIEWPORTS.desktop],
+])('on a %s screen', (_label, viewport) => {
+  const tag = viewportTag(viewport);
+  let server: TestServer;
+  let opened: OpenedBrowser;
+
+  beforeAll(async () => {
+    assertWebAppBuilt();
+    server = await startTestServer({ seed: true });
+    opened = await openBrowser({ viewport });
+  });
+
+  afterAll(async () => {
+    await opened?.close();
+    await server?.close();
+  });
+
+  it('when the owner edits a site description, then it is kept after a reload, and a deleted site leaves the list', async () => {
+    const { page } = opened;
+    await signInAs(page, server, 'owner');
+    const id = await siteId(server, 'Boiler house');
+
+    // Rows carry name, description and the date the site was created.
+    const row = page.getByTestId(`site-${id}`);
+    await expect(row.innerText()).resolves.toMatch(/Boiler house[\s\S]*fire-tube steam boilers[\s\S]*Created \d{1,2} [A-Z][a-z]{2} \d{4}/);
+    await expect(page.getByRole('button', { name: 'Create a site' }).count()).resolves.toBe(1);
+    await screenshot(page, `team-sites-${tag}-01-sites-owner`);
+
+    await row.click();
+    await page.waitForURL(`**/sites/${id}`);
+    await page.getByRole('heading', { name: 'Boiler house', exact: true }).waitFor();
+    // The seeded boiler house is indoors: 40 °C touch basis, 70 % humidity for condensation.
+    await expect(page.getByTestId('basis-touch-airTemperatureC-value').innerText()).resolves.toBe('40 °C');
+    await expect(page.getByTestId('basis-condensation-relativeHumidityPct-value').innerText()).resolves.toBe('70 %');
+    await expect(page.getByTestId('basis-energy-heatSourceEfficiency-value').innerText()).resolves.toBe('85 %');
+    await screenshot(page, `team-sites-${tag}-02-site-detail`);
+
+    // A bad number is refused at its field, naming it; nothing is sent.
+    await page.getByTestId('site-edit').click();
+    await fill(page, 'basis-touch-windSpeedMS', 'calm');
+    await page.getByTestId('site-save').click();
+    await page.getByText('Touch safety: wind speed must be a number').waitFor();
+    await fill(page, 'basis-touch-windSpeedMS', '0');
+
+    const description = `Two fire-tube boilers and the condensate return, walked ${tag}.`;
+    await fill(page, 'site-edit-description', description);
+    await screenshot(page, `team-sites-${tag}-03-site-edit`);
+    await page.getByTestId('site-save').click();
+    await page.getByTestId('site-edit-form').waitFor({ state: 'detached' });
+    await page.getByText(description).waitFor();
+
+    // A hard reload of the site's own address serves the app and shows the stored description.
+    const response = await page.goto(`${server.url}/sites/${id}`, { waitUntil: 'load' });
+    expect(response?.status()).toBe(200);
+    await page.waitForLoadState('networkidle');
+    await page.getByText(description).waitFor();
+    const stored = (await server.db('sites').where({ id }).first('description', 'design_bases')) as { description: string };
+    expect(stored.description).toBe(description);
+    await screenshot(page, `team-sites-${tag}-04-site-reloaded`);
+
+    // Deleting asks first, then goes back to the list without the site.
+    const chilled = await siteId(server, 'Chilled water');
+    await gotoApp(page, `${server.url}/sites/${chilled}`);
+    await page.getByTestId('site-delete').click();
+    await page.getByTestId('site-delete-confirm').waitFor();
+    await screenshot(page, `team-sites-${tag}-05-delete-confirm`);
+    await page.getByTestId('site-delete-confirm-button').click();
+    await page.waitForURL((u) => new URL(u).pathname === '/sites');
+    await page.getByTestId(`site-${id}`).waitFor();
+    await expect(page.getByTestId(`site-${chilled}`).count()).resolves.toBe(0);
+    await expect(server.db('sites').where({ id: chilled }).first('id')).resolves.toBeUndefined();
+
+    // A site that is gone says so at its address.
+    await gotoApp(page, `${server.url}/sites/${chilled}`);
+    await page.getByTestId('site-missing').waitFor();
+
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when the owner removes a member after confirming, then the member is gone, and removing the last owner is refused with the reason', async () => {
+    const { page } = opened;
+    const contractor = user('contractor');
+    const owner = user('owner');
+    await page.getByRole('link', { name: 'Team', exact: true }).click();
+    await page.waitForURL('**/team');
+    const row = page.getByTestId(`member-${contractor.email}`);
+    await row.waitFor();
+
+    // The first press only asks; keeping the member changes nothing.
+    await page.getByRole('button', { name: `Remove ${contractor.name} from the team` }).click();
+    await page.getByTestId(`remove-confirm-${contractor.email}`).waitFor();
+    await screenshot(page, `team-sites-${tag}-06-remove-confirm`);
+    await page.getByRole('button', { name: `Keep ${contractor.name}` }).click();
+    await page.getByTestId(`remove-confirm-${contractor.email}`).waitFor({ state: 'detached' });
+    await row.waitFor();
+
+    await page.getByRole('button', { name: `Remove ${contractor.name} from the team` }).click();
+    await page.getByRole('button', { name: `Yes, remove ${contractor.name}` }).click();
+    await row.waitFor({ state: 'detached' });
+    await gotoApp(page, `${server.url}/team`);
+    await page.getByTestId(`member-${owner.email}`).waitFor();
+    await expect(page.getByTestId(`member-${contractor.email}`).count()).resolves.toBe(0);
+    const memberships = await server.db('memberships as m').join('users as u', 'u.id', 'm.user_id').where('u.email', contractor.email).count({ n: '*' });
+    expect(Number((memberships[0] as { n: number | string }).n)).toBe(0);
+
+    // The only owner cannot leave: the server's reason is shown and the owner stays.
+    await page.getByRole('button', { name: `Remove ${owner.name} from the team` }).click();
+    await page.getByRole('button', { name: `Yes, remove ${owner.name}` }).click();
+    const ownerRow = page.getByTestId(`member-${owner.email}`);
+    await ownerRow.getByText('A team needs at least one owner').waitFor();
+    await expect(ownerRow.getByRole('alert').innerText()).resolves.toContain('Not removed');
+    await screenshot(page, `team-sites-${tag}-07-last-owner-refused`);
+
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it("when caught mail holds this app's link, then it is a same-tab link and other addresses stay text", async () => {
+    const { page } = opened;
+    const email = `new-engineer-${tag}@ashcombe.example`;
+    await fill(page, 'invite-email', email);
+    await page.getByTestId('invite-submit').click();
+    await page.getByTestId('invite-sent').waitFor();
+    const mail = await server.mail.waitFor(email);
+    const link = mail.text.match(/https?:\/\/\S+token=[A-Za-z0-9_-]+/)?.[0];
+    expect(link && new URL(link).origin).toBe(server.url);
+
+    const panel = page.getByTestId('caught-mail');
+    await panel.getByRole('button', { name: 'Refresh' }).click();
+    const anchor = panel.locator(`a[href="${new URL(link!).pathname}${new URL(link!).search}"]`).first();
+    await anchor.waitFor();
+    await expect(anchor.getAttribute('target')).resolves.toBeNull();
+    // Every anchor in the panel stays on this origin.
+    const hrefs = await panel.locator('a').evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).href));
+    expect(hrefs.length).toBeGreaterThan(0);
+    expect(hrefs.every((h) => new URL(h).origin === server.url)).toBe(true);
+    await screenshot(page, `team-sites-${tag}-08-caught-mail-link`);
+
+    const pages = page.context().pages().length;
+    await anchor.click();
+    await page.waitForURL((u) => new URL(u).pathname === '/accept-invite');
+    expect(new URL(page.url()).searchParams.get('token')).toBe(new URL(link!).searchParams.get('token'));
+    expect(page.context().pages().length).toBe(pages);
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when signed in, then quick sizing sits inside the navigation with Quick sizing current; anonymous, it keeps its sign-in link', async () => {
+    const { page } = opened;
+    await gotoApp(page, `${server.url}/quick-sizing`);
+    await page.waitForSelector('[data-testid="qs-screen"][data-ready="true"]');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.waitFor();
+    await expect(nav.getByRole('link', { name: 'Quick sizing' }).getAttribute('aria-current')).resolves.toBe('page');
+    await expect(nav.getByRole('link', { name: 'Sites' }).getAttribute('aria-current')).resolves.toBeNull();
+    await page.getByText('Your sites', { exact: true }).waitFor();
+    // Phones keep the pinned results above the bottom bar, not under it.
+    if (viewport.width < 900) {
+      const summary = await page.getByTestId('qs-summary').boundingBox();
+      const bar = await nav.boundingBox();
+      expect(summary && bar && summary.y + summary.height <= bar.y + 1).toBe(true);
+    }
+    await screenshot(page, `team-sites-${tag}-09-quick-sizing-signed-in`);
+
+    await nav.getByRole('link', { name: 'Team' }).click();
+    await page.waitForURL('**/team');
+
+    await forgetSession(page);
+    await gotoApp(page, `${server.url}/quick-sizing`);
+    await page.waitForSelector('[data-testid="qs-screen"][data-ready="true"]');
+    await page.getByText('Sign in', { exact: true }).waitFor();
+    await expect(page.getByRole('navigation', { name: 'Main' }).count()).resolves.toBe(0);
+    await screenshot(page, `team-sites-${tag}-10-quick-sizing-anonymous`);
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when a safety officer edits a site, then only the touch-safety basis is offered and saved', async () => {
+    const { page } = opened;
+    await signInAs(page, server, 'safety');
+    await expect(page.getByRole('button', { name: 'Create a site' }).count()).resolves.toBe(0);
+    const id = await siteId(server, 'Tank farm');
+    await page.getByTestId(`site-${id}`).click();
+    await page.waitForURL(`**/sites/${id}`);
+    await page.getByRole('button', { name: 'Edit touch-safety basis' }).click();
+    await page.getByTestId('basis-touch-airTemperatureC').waitFor();
+    await expect(page.getByTestId('site-edit-name').count()).resolves.toBe(0);
+    await expect(page.getByTestId('basis-energy-airTemperatureC').count()).resolves.toBe(0);
+    await expect(page.getByTestId('site-delete').count()).resolves.toBe(0);
+    await fill(page, 'basis-touch-airTemperatureC', '45');
+    await screenshot(page, `team-sites-${tag}-11-safety-edit`);
+    await page.getByTestId('site-save').click();
+    await page.getByTestId('site-edit-form').waitFor({ state: 'detached' });
+    await expect(page.getByTestId('basis-touch-airTemperatureC-value').innerText()).resolves.toBe('45 °C');
+    const row = (await server.db('sites').where({ id }).first('design_bases')) as { design_bases: unknown };
+    const bases = (typeof row.design_bases === 'string' ? JSON.parse(row.design_bases) : row.design_bases) as {
+      touch: { airTemperatureC: number; contactSeconds: number };
+      energy: { airTemperatureC: number };
+    };
+    expect(bases.touch.airTemperatureC).toBe(45);
+    expect(bases.touch.contactSeconds).toBe(5);
+    expect(bases.energy.airTemperatureC).toBe(9);
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when a viewer opens a site, then there are no edit controls, and a hard reload of its address keeps the page', async () => {
+    const { page } = opened;
+    await signInAs(page, server, 'viewer');
+    await expect(page.getByRole('button', { name: 'Create a site' }).count()).resolves.toBe(0);
+    const id = await siteId(server, 'Thermal-oil loop');
+    await page.getByTestId(`site-${id}`).click();
+    await page.waitForURL(`**/sites/${id}`);
+    await page.getByTestId('basis-touch').waitFor();
+    await expect(page.getByTestId('basis-touch-airTemperatureC-value').innerText()).resolves.toBe('35 °C');
+    for (const control of ['site-edit', 'site-delete', 'site-edit-form']) {
+      await expect(page.getByTestId(control).count()).resolves.toBe(0);
+    }
+    await expect(page.getByRole('button', { name: /Edit|Delete|Set the/ }).count()).resolves.toBe(0);
+    await screenshot(page, `team-sites-${tag}-12-viewer-site`);
+
+    await page.reload({ waitUntil: 'load' });
+    await page.waitForLoadState('networkidle');
+    await page.getByRole('heading', { name: 'Thermal-oil loop', exact: true }).waitFor();
+    await expect(page.getByTestId('site-edit').count()).resolves.toBe(0);
+    await screenshot(page, `team-sites-${tag}-13-viewer-reloaded`);
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+    assertOnlyLoopback(opened.requests);
+  });
+});
