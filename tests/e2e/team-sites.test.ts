@@ -225,11 +225,16 @@ describe.each([
     await expect(nav.getByRole('link', { name: 'Quick sizing' }).getAttribute('aria-current')).resolves.toBe('page');
     await expect(nav.getByRole('link', { name: 'Sites' }).getAttribute('aria-current')).resolves.toBeNull();
     await page.getByText('Your sites', { exact: true }).waitFor();
-    // Phones keep the pinned results above the bottom bar, not under it.
+    const navBox = await nav.boundingBox();
     if (viewport.width < 900) {
+      // Phones keep the pinned results above the bottom bar, not under it.
       const summary = await page.getByTestId('qs-summary').boundingBox();
-      const bar = await nav.boundingBox();
-      expect(summary && bar && summary.y + summary.height <= bar.y + 1).toBe(true);
+      expect(summary && navBox && summary.y + summary.height <= navBox.y + 1).toBe(true);
+    } else {
+      // Wide screens: a full-height rail with the page beside it, as on every signed-in page.
+      const content = await page.getByTestId('qs-screen').boundingBox();
+      expect(navBox && navBox.height >= viewport.height - 1).toBe(true);
+      expect(content && navBox && content.x >= navBox.x + navBox.width - 1 && content.y < navBox.y + 1).toBe(true);
     }
     await screenshot(page, `team-sites-${tag}-09-quick-sizing-signed-in`);
 

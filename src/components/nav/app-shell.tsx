@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { breakpoints, colors, radius, spacing } from '../../theme';
+import { useHydrated } from '../common/use-hydrated';
 import { Icon, Text } from '../ui';
 
 import { destinations, isActive } from './destinations';
@@ -24,7 +25,10 @@ export interface AppShellProps {
  */
 export function AppShell({ teamName, userName, navigation = true, children }: AppShellProps) {
   const { width } = useWindowDimensions();
-  const wide = width >= breakpoints.wide;
+  // The exported HTML is laid out for a phone; hydration keeps that first frame, then widens, because
+  // React does not patch styles that differ while hydrating (public pages are hydrated in the shell).
+  const hydrated = useHydrated();
+  const wide = hydrated && width >= breakpoints.wide;
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
 
