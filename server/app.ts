@@ -1,4 +1,4 @@
-import express, { type Express, type Router } from 'express';
+import express, { type Express, type Request, type RequestHandler, type Router } from 'express';
 import { registerAuthRoutes } from './auth/auth.routes';
 import { createCalcPool, type CalcPool } from './calculations/calc-pool';
 import { registerCalculationRoutes } from './calculations/calculations.routes';
@@ -41,17 +41,20 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.use(requestId);
   app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls: config.appUrl.startsWith('https:') }));
 
+  const isCalculation = (req: Request) => req.path === CALCULATIONS;
   // Batches of cases may be large; everything else stays small.
   const bigJson = express.json({ limit: '12mb' });
   const smallJson = express.json({ limit: '100kb' });
-  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? bigJson : smallJson)(req, res, next));
+  app.use('/api', (req, res, next) => (isCalculation(req) ? bigJson : smallJson)(req, res, next));
 
   // Calculations are stateless: no session, no CSRF token.
-  const session = sessionMiddleware(db, config);
-  const caller = loadSessionCaller(deps);
-  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? next() : session(req, res, next)));
-  app.use('/api', (req, res, next) => (req.path === CALCULATIONS ? next() : caller(req, res, next)));
-  app.use('/api', csrfProtection({ appOrigin: new URL(config.appUrl).origin, exempt: (req) => req.path === CALCULATIONS }));
+  const exceptCalculations =
+    (handler: RequestHandler): RequestHandler =>
+    (req, res, next) =>
+      isCalculation(req) ? next() : handler(req, res, next);
+  app.use('/api', exceptCalculations(sessionMiddleware(db, config)));
+  app.use('/api', exceptCalculations(loadSessionCaller(deps)));
+  app.use('/api', csrfProtection({ appOrigin: new URL(config.appUrl).origin, exempt: isCalculation }));
 
   const api = express.Router();
   registerHealthRoutes(api, deps);

@@ -67,9 +67,9 @@ function persistedDevSecret(dir: string): string {
   return secret;
 }
 
-/** Reads and validates the environment once; throws ConfigError listing every problem. */
 export type Env = Record<string, string | undefined>;
 
+/** Reads and validates the environment once; throws ConfigError listing every problem. */
 export function loadConfig(env: Env = process.env): Config {
   const problems: string[] = [];
   const nodeEnv = env.NODE_ENV === 'production' ? 'production' : env.NODE_ENV === 'test' ? 'test' : 'development';

@@ -1,6 +1,6 @@
 import 'express-serve-static-core';
 import 'express-session';
-import type { Role } from '../shared/schemas/common';
+import type { Caller } from './auth/auth.service';
 
 declare module 'express-session' {
   interface SessionData {
@@ -16,6 +16,6 @@ declare module 'express-serve-static-core' {
   interface Request {
     id: string;
     /** Set by the session loader when the caller is signed in and still a member of the team. */
-    auth?: { userId: number; teamId: number; role: Role; email: string; name: string };
+    auth?: Caller;
   }
 }

@@ -3,7 +3,7 @@ import { passwordResetConfirmSchema, passwordResetRequestSchema, signInSchema, s
 import type { Deps } from '../deps';
 import { ensureCsrfToken } from '../http/csrf';
 import { publicRoute, route } from '../http/routes';
-import { endSession, startSignedInSession } from '../http/session';
+import { SESSION_COOKIE, endSession, signInWithPayload } from '../http/session';
 import { validateBody } from '../http/validate';
 import * as auth from './auth.service';
 
@@ -15,21 +15,17 @@ export function registerAuthRoutes(router: Router, deps: Deps): void {
 
   route(router, 'post', '/api/v1/auth/signup', publicRoute(), deps.limiters.signin, validateBody(signUpSchema), async (req, res) => {
     const { userId, teamId } = await auth.signUp(deps, req.body, req.ip);
-    const token = await startSignedInSession(req, userId, teamId);
-    const caller = await auth.loadCaller(deps, userId, teamId);
-    res.status(201).json(await auth.sessionPayload(deps, caller ?? undefined, token));
+    res.status(201).json(await signInWithPayload(deps, req, userId, teamId));
   });
 
   route(router, 'post', '/api/v1/auth/signin', publicRoute(), deps.limiters.signin, validateBody(signInSchema), async (req, res) => {
     const { userId, teamId } = await auth.signIn(deps, req.body, req.ip);
-    const token = await startSignedInSession(req, userId, teamId);
-    const caller = await auth.loadCaller(deps, userId, teamId);
-    res.json(await auth.sessionPayload(deps, caller ?? undefined, token));
+    res.json(await signInWithPayload(deps, req, userId, teamId));
   });
 
   route(router, 'post', '/api/v1/auth/signout', publicRoute(), async (req, res) => {
     await endSession(req);
-    res.clearCookie('lagline.sid', { path: '/', httpOnly: true, sameSite: 'lax' });
+    res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax' });
     res.status(204).end();
   });
 

@@ -87,8 +87,10 @@ export async function requestPasswordReset(
   // Finished in the background: the answer must not take longer for real accounts than for unknown ones.
   void (async () => {
     const { token, hash } = newToken();
-    await insertPasswordReset(deps.db, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
-    await insertAudit(deps.db, { userId: user.id, action: 'auth.password_reset_requested', ip });
+    await inTransaction(deps.db, async (trx) => {
+      await insertPasswordReset(trx, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+      await insertAudit(trx, { userId: user.id, action: 'auth.password_reset_requested', ip });
+    });
     const link = `${deps.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
     await deps.mailer.send(passwordResetMail({ to: user.email, link }));
   })().catch((e) => deps.logger.error('password reset request failed:', e));

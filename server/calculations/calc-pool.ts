@@ -12,6 +12,8 @@ export type CalcPool = {
   close: () => Promise<void>;
 };
 
+const queueFull = () => errors.unavailable('BUSY', 'The calculation queue is full; try again in a moment.');
+
 /** Error paths from a chunk start at [0]; make them index the whole batch. */
 function renumber(result: unknown, offset: number): unknown {
   const err = (result as { error?: { field?: unknown } } | null)?.error;
@@ -39,7 +41,7 @@ export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.j
       for (let i = 0; i < cases.length; i += size) chunks.push(cases.slice(i, i + size));
       // Refuse up front rather than half-run a batch the queue cannot take.
       if (p.queueSize + chunks.length > config.calc.maxQueue) {
-        throw errors.unavailable('BUSY', 'The calculation queue is full; try again in a moment.');
+        throw queueFull();
       }
       const abort = new AbortController();
       setMaxListeners(0, abort.signal);
@@ -57,7 +59,7 @@ export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.j
       } catch (e) {
         abort.abort();
         if (e instanceof Error && /queue is at limit/i.test(e.message)) {
-          throw errors.unavailable('BUSY', 'The calculation queue is full; try again in a moment.');
+          throw queueFull();
         }
         throw e;
       }

@@ -1,7 +1,7 @@
 import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import { ConnectSessionKnexStore } from 'connect-session-knex';
-import { isPastAbsoluteTimeout, loadCaller } from '../auth/auth.service';
+import { isPastAbsoluteTimeout, loadCaller, sessionPayload } from '../auth/auth.service';
 import type { Config } from '../config';
 import type { Db } from '../db/db';
 import { ensureCsrfToken } from './csrf';
@@ -45,7 +45,7 @@ const call = (fn: (cb: (err?: unknown) => void) => void) =>
   new Promise<void>((resolve, reject) => fn((err) => (err ? reject(err) : resolve())));
 
 /** A fresh session id at every sign-in, so an id planted before sign-in is worthless after it. */
-export async function startSignedInSession(req: Request, userId: number, teamId: number): Promise<string> {
+async function startSignedInSession(req: Request, userId: number, teamId: number): Promise<string> {
   await call((cb) => req.session.regenerate(cb));
   req.session.userId = userId;
   req.session.teamId = teamId;
@@ -53,6 +53,12 @@ export async function startSignedInSession(req: Request, userId: number, teamId:
   const token = ensureCsrfToken(req);
   await call((cb) => req.session.save(cb));
   return token;
+}
+
+/** Signs the user in on this request and returns what the client keeps of the new session. */
+export async function signInWithPayload(deps: { db: Db }, req: Request, userId: number, teamId: number) {
+  const token = await startSignedInSession(req, userId, teamId);
+  return sessionPayload(deps, (await loadCaller(deps, userId, teamId)) ?? undefined, token);
 }
 
 export async function endSession(req: Request): Promise<void> {

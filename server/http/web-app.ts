@@ -35,11 +35,11 @@ export function inlineScriptHashes(distDir: string): string[] {
 type Pattern = { segments: string[]; file: string; score: number };
 
 /** Expo's static output names dynamic routes [param].html and catch-alls [...rest].html. */
-function dynamicPatterns(distDir: string): Pattern[] {
+function dynamicPatterns(files: readonly string[]): Pattern[] {
   const patterns: Pattern[] = [];
-  for (const rel of htmlFiles(distDir)) {
+  for (const rel of files) {
     if (!rel.includes('[')) continue;
-    let route = rel.replace(/\\/g, '/').replace(/\.html$/, '');
+    let route = rel.replace(/\.html$/, '');
     if (route.endsWith('/index')) route = route.slice(0, -'/index'.length);
     const segments = route.split('/').filter((s) => !/^\(.*\)$/.test(s));
     // More literal segments first; catch-alls last.
@@ -76,12 +76,13 @@ export function mountWebApp(app: Express, distDir: string): void {
   }
   app.use(express.static(distDir, { index: false, redirect: false, fallthrough: true, dotfiles: 'ignore' }));
   // Route groups such as (app)/ do not appear in URLs; a file outside a group wins.
+  const files = htmlFiles(distDir).map((f) => f.replace(/\\/g, '/'));
   const pages = new Map<string, string>();
-  for (const rel of htmlFiles(distDir).map((f) => f.replace(/\\/g, '/')).sort((a, b) => a.split('(').length - b.split('(').length)) {
+  for (const rel of [...files].sort((a, b) => a.split('(').length - b.split('(').length)) {
     const key = rel.split('/').filter((seg) => !/^\(.*\)$/.test(seg)).join('/');
     if (!pages.has(key)) pages.set(key, rel);
   }
-  const patterns = dynamicPatterns(distDir);
+  const patterns = dynamicPatterns(files);
   const notFound = fs.existsSync(path.join(distDir, '+not-found.html')) ? '+not-found.html' : null;
   const send = (res: Response, rel: string, status = 200) => {
     res.status(status).type('html').sendFile(path.join(distDir, rel), { dotfiles: 'allow' });

@@ -58,3 +58,8 @@ export async function markInvitationAccepted(db: Db, id: number, now: Date): Pro
 export async function deleteInvitation(db: Db, teamId: number, id: number): Promise<number> {
   return db('invitations').where({ team_id: teamId, id }).whereNull('accepted_at').delete();
 }
+
+/** Deletes the team's open invitations to one address (before a new one replaces them). */
+export async function deleteOpenInvitationsTo(db: Db, teamId: number, email: string, now: Date): Promise<void> {
+  await db('invitations').where({ team_id: teamId, email }).whereNull('accepted_at').where('expires_at', '>', now).delete();
+}

@@ -1,10 +1,9 @@
 import type { Router } from 'express';
 import { invitationAcceptSchema, invitationCreateSchema } from '../../shared/schemas/team';
-import * as auth from '../auth/auth.service';
 import type { Deps } from '../deps';
 import { errors } from '../errors';
 import { authorize, publicRoute, route } from '../http/routes';
-import { startSignedInSession } from '../http/session';
+import { signInWithPayload } from '../http/session';
 import { idParam, validateBody } from '../http/validate';
 import * as invitations from './invitations.service';
 
@@ -21,9 +20,7 @@ export function registerInvitationRoutes(router: Router, deps: Deps): void {
 
   route(router, 'post', '/api/v1/invitations/:token/accept', publicRoute(), validateBody(invitationAcceptSchema), async (req, res) => {
     const { userId, teamId } = await invitations.acceptInvitation(deps, tokenParam(req.params.token), req.body, req.auth, req.ip);
-    const token = await startSignedInSession(req, userId, teamId);
-    const caller = await auth.loadCaller(deps, userId, teamId);
-    res.status(201).json(await auth.sessionPayload(deps, caller ?? undefined, token));
+    res.status(201).json(await signInWithPayload(deps, req, userId, teamId));
   });
 
   route(

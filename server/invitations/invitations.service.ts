@@ -13,6 +13,7 @@ import { invitationMail } from '../mail/templates';
 import { findMember, findTeam, insertMembership } from '../team/teams.repository';
 import {
   deleteInvitation,
+  deleteOpenInvitationsTo,
   findOpenInvitationByTokenHash,
   insertInvitation,
   listOpenInvitations,
@@ -30,7 +31,7 @@ export async function createInvitation(
   ip?: string,
 ): Promise<InvitationSummary> {
   const email = normaliseEmail(input.email);
-  const role = input.role as Role;
+  const role = input.role;
   const existing = await findUserByEmail(deps.db, email);
   if (existing && (await findMember(deps.db, caller.teamId, existing.id))) {
     throw errors.conflict('ALREADY_MEMBER', 'This person is already a member of the team.', 'email');
@@ -40,9 +41,7 @@ export async function createInvitation(
   const expiresAt = new Date(Date.now() + INVITATION_TTL_MS);
   const id = await inTransaction(deps.db, async (trx) => {
     // A new invitation to the same address replaces the open one.
-    for (const open of await listOpenInvitations(trx, caller.teamId, new Date())) {
-      if (open.email === email) await deleteInvitation(trx, caller.teamId, open.id);
-    }
+    await deleteOpenInvitationsTo(trx, caller.teamId, email, new Date());
     const newId = await insertInvitation(trx, { teamId: caller.teamId, email, role, tokenHash: hash, invitedBy: caller.userId, expiresAt });
     await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'invitation.created', targetType: 'invitation', targetId: newId, details: { email, role }, ip });
     return newId;
@@ -60,9 +59,10 @@ export async function listInvitations(deps: { db: Db }, caller: Caller): Promise
 }
 
 export async function revokeInvitation(deps: { db: Db }, caller: Caller, id: number, ip?: string): Promise<void> {
-  const n = await deleteInvitation(deps.db, caller.teamId, id);
-  if (!n) throw errors.notFound('The invitation');
-  await insertAudit(deps.db, { teamId: caller.teamId, userId: caller.userId, action: 'invitation.revoked', targetType: 'invitation', targetId: id, ip });
+  await inTransaction(deps.db, async (trx) => {
+    if (!(await deleteInvitation(trx, caller.teamId, id))) throw errors.notFound('The invitation');
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'invitation.revoked', targetType: 'invitation', targetId: id, ip });
+  });
 }
 
 export async function describeInvitation(deps: { db: Db }, token: string) {

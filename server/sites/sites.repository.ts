@@ -23,17 +23,19 @@ function toSite(r: SiteRow): Site {
   };
 }
 
-/** Sites of the team; when onlyForUserId is given, only sites that user was invited to. */
-export async function listSites(db: Db, teamId: number, onlyForUserId?: number): Promise<Site[]> {
-  const q = db<SiteRow>('sites').where({ team_id: teamId }).orderBy('name');
+/** The team's sites; when onlyForUserId is given, only the sites that user was invited to. */
+function visibleSites(db: Db, teamId: number, onlyForUserId?: number) {
+  const q = db<SiteRow>('sites').where({ team_id: teamId });
   if (onlyForUserId !== undefined) q.whereIn('id', db('site_members').select('site_id').where({ user_id: onlyForUserId }));
-  return (await q).map(toSite);
+  return q;
+}
+
+export async function listSites(db: Db, teamId: number, onlyForUserId?: number): Promise<Site[]> {
+  return (await visibleSites(db, teamId, onlyForUserId).orderBy('name')).map(toSite);
 }
 
 export async function findSite(db: Db, teamId: number, id: number, onlyForUserId?: number): Promise<Site | undefined> {
-  const q = db<SiteRow>('sites').where({ team_id: teamId, id });
-  if (onlyForUserId !== undefined) q.whereIn('id', db('site_members').select('site_id').where({ user_id: onlyForUserId }));
-  const row = await q.first();
+  const row = await visibleSites(db, teamId, onlyForUserId).where({ id }).first();
   return row ? toSite(row) : undefined;
 }
 

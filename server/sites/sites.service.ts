@@ -17,6 +17,10 @@ export const DEFAULT_DESIGN_BASES: DesignBases = {
 /** Contractors see only the sites they were invited to. */
 const visibleTo = (caller: Caller) => (caller.role === 'contractor' ? caller.userId : undefined);
 
+async function assertNameFree(trx: Db, teamId: number, name: string, exceptId?: number): Promise<void> {
+  if (await repo.siteNameTaken(trx, teamId, name, exceptId)) throw errors.conflict('NAME_TAKEN', 'The team already has a site with this name.', 'name');
+}
+
 export const listSites = (deps: { db: Db }, caller: Caller) => repo.listSites(deps.db, caller.teamId, visibleTo(caller));
 
 export async function getSite(deps: { db: Db }, caller: Caller, id: number) {
@@ -28,7 +32,7 @@ export async function getSite(deps: { db: Db }, caller: Caller, id: number) {
 
 export async function createSite(deps: { db: Db }, caller: Caller, input: SiteCreateInput, ip?: string) {
   return inTransaction(deps.db, async (trx) => {
-    if (await repo.siteNameTaken(trx, caller.teamId, input.name)) throw errors.conflict('NAME_TAKEN', 'The team already has a site with this name.', 'name');
+    await assertNameFree(trx, caller.teamId, input.name);
     const id = await repo.insertSite(trx, {
       teamId: caller.teamId,
       name: input.name,
@@ -57,9 +61,7 @@ export async function updateSite(deps: { db: Db }, caller: Caller, id: number, p
   return inTransaction(deps.db, async (trx) => {
     const site = await repo.findSite(trx, caller.teamId, id, visibleTo(caller));
     if (!site) throw errors.notFound('The site');
-    if (patch.name !== undefined && (await repo.siteNameTaken(trx, caller.teamId, patch.name, id))) {
-      throw errors.conflict('NAME_TAKEN', 'The team already has a site with this name.', 'name');
-    }
+    if (patch.name !== undefined) await assertNameFree(trx, caller.teamId, patch.name, id);
     await repo.updateSite(trx, caller.teamId, id, {
       name: patch.name,
       description: patch.description,
@@ -79,18 +81,19 @@ export async function deleteSite(deps: { db: Db }, caller: Caller, id: number, i
 }
 
 export async function addSiteMember(deps: { db: Db }, caller: Caller, siteId: number, userId: number, ip?: string) {
-  const site = await repo.findSite(deps.db, caller.teamId, siteId);
-  if (!site) throw errors.notFound('The site');
-  if (!(await findMember(deps.db, caller.teamId, userId))) throw errors.badRequest('VALIDATION_FAILED', 'This person is not a member of the team.', 'userId');
-  await repo.addSiteMember(deps.db, siteId, userId, caller.userId);
-  await insertAudit(deps.db, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_added', targetType: 'site', targetId: siteId, details: { userId }, ip });
-  return repo.listSiteMembers(deps.db, siteId);
+  return inTransaction(deps.db, async (trx) => {
+    if (!(await repo.findSite(trx, caller.teamId, siteId))) throw errors.notFound('The site');
+    if (!(await findMember(trx, caller.teamId, userId))) throw errors.badRequest('VALIDATION_FAILED', 'This person is not a member of the team.', 'userId');
+    await repo.addSiteMember(trx, siteId, userId, caller.userId);
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_added', targetType: 'site', targetId: siteId, details: { userId }, ip });
+    return repo.listSiteMembers(trx, siteId);
+  });
 }
 
 export async function removeSiteMember(deps: { db: Db }, caller: Caller, siteId: number, userId: number, ip?: string): Promise<void> {
-  const site = await repo.findSite(deps.db, caller.teamId, siteId);
-  if (!site) throw errors.notFound('The site');
-  const n = await repo.removeSiteMember(deps.db, siteId, userId);
-  if (!n) throw errors.notFound('The site member');
-  await insertAudit(deps.db, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_removed', targetType: 'site', targetId: siteId, details: { userId }, ip });
+  await inTransaction(deps.db, async (trx) => {
+    if (!(await repo.findSite(trx, caller.teamId, siteId))) throw errors.notFound('The site');
+    if (!(await repo.removeSiteMember(trx, siteId, userId))) throw errors.notFound('The site member');
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.member_removed', targetType: 'site', targetId: siteId, details: { userId }, ip });
+  });
 }

@@ -65,21 +65,22 @@ type Prepared = {
   dewC: number | undefined;
 };
 
-type Evaluation = {
-  models: SurfaceModel[];
-  names: VesselPart['name'][];
-  areas: number[];
+/** The surfaces of a build-up before they are solved; `names` only for a vessel's parts. */
+type Surfaces = { models: SurfaceModel[]; names: VesselPart['name'][] };
+
+type Evaluation = Surfaces & {
   /** W/m (pipe), W/m² (flat) or W (vessel). */
   heatFlow: number;
+  /** Index of the hottest part, whose coefficients and faces the result reports. */
   governing: number;
   maxSurfaceC: number;
   minSurfaceC: number;
 };
 
-function newModel(p: Prepared, processC: number): SurfaceModel {
+function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number): SurfaceModel {
   return {
-    coeffs: [],
-    factor: new Float64Array(0),
+    coeffs,
+    factor: new Float64Array(layerCount),
     seriesR: 0,
     area: 1,
     naturalKind: NATURAL_VERTICAL_PLATE,
@@ -108,10 +109,8 @@ function cylinderModel(
   thicknesses: readonly number[],
   coeffs: number[][],
 ): SurfaceModel {
-  const m = newModel(p, processC);
   const n = thicknesses.length;
-  m.coeffs = coeffs;
-  m.factor = new Float64Array(n);
+  const m = newModel(p, processC, coeffs, n);
   let r = r0;
   for (let i = 0; i < n; i++) {
     const r2 = r + thicknesses[i];
@@ -125,7 +124,7 @@ function cylinderModel(
   return m;
 }
 
-function buildEvaluation(p: Prepared, thicknesses: readonly number[], coeffs: number[][], processC: number): Evaluation {
+function buildSurfaces(p: Prepared, thicknesses: readonly number[], coeffs: number[][], processC: number): Surfaces {
   const c = p.c;
   const g = c.geometry;
   const film = c.insideFilmWPerM2K;
@@ -144,13 +143,11 @@ function buildEvaluation(p: Prepared, thicknesses: readonly number[], coeffs: nu
       m.naturalKind = NATURAL_VERTICAL_PLATE;
       m.naturalLengthM = g.heightM as number;
     }
-    return single(m, 1);
+    return { models: [m], names: [] };
   }
   if (g.type === 'flat') {
-    const m = newModel(p, processC);
     const n = thicknesses.length;
-    m.coeffs = coeffs;
-    m.factor = new Float64Array(n);
+    const m = newModel(p, processC, coeffs, n);
     for (let i = 0; i < n; i++) m.factor[i] = thicknesses[i];
     if (film) m.seriesR = 1 / film;
     m.area = 1;
@@ -163,7 +160,7 @@ function buildEvaluation(p: Prepared, thicknesses: readonly number[], coeffs: nu
     }
     m.forcedKind = FORCED_PLATE;
     m.forcedLengthM = g.lengthAlongWindM ?? g.heightM ?? (g.characteristicLengthM as number);
-    return single(m, 1);
+    return { models: [m], names: [] };
   }
   // Vessel: shell plus two heads, each solved as its own surface of its own area.
   const D = g.diameterM;
@@ -178,10 +175,8 @@ function buildEvaluation(p: Prepared, thicknesses: readonly number[], coeffs: nu
   }
   const heads: SurfaceModel[] = [];
   for (let h = 0; h < 2; h++) {
-    const m = newModel(p, processC);
     const n = thicknesses.length;
-    m.coeffs = coeffs;
-    m.factor = new Float64Array(n);
+    const m = newModel(p, processC, coeffs, n);
     let offset = 0;
     let A1 = headArea(g.headType, D, 0);
     const A0 = A1;
@@ -206,24 +201,13 @@ function buildEvaluation(p: Prepared, thicknesses: readonly number[], coeffs: nu
     m.forcedLengthM = Dout;
     heads.push(m);
   }
-  const models = [shell, heads[0], heads[1]];
-  return {
-    models,
-    names: ['shell', 'head1', 'head2'],
-    areas: models.map((m) => m.area),
-    heatFlow: 0,
-    governing: 0,
-    maxSurfaceC: 0,
-    minSurfaceC: 0,
-  };
+  return { models: [shell, ...heads], names: ['shell', 'head1', 'head2'] };
 }
 
-function single(m: SurfaceModel, area: number): Evaluation {
-  return { models: [m], names: [], areas: [area], heatFlow: 0, governing: 0, maxSurfaceC: 0, minSurfaceC: 0 };
-}
-
-function solveEvaluation(ev: Evaluation, horizontalVessel: boolean): void {
-  const ms = ev.models;
+function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][], processC: number): Evaluation {
+  const { models: ms, names } = buildSurfaces(p, thicknesses, coeffs, processC);
+  const g = p.c.geometry;
+  const horizontalVessel = g.type === 'vessel' && g.orientation === 'horizontal';
   let total = 0;
   let gov = 0;
   let maxT = -Infinity;
@@ -248,17 +232,7 @@ function solveEvaluation(ev: Evaluation, horizontalVessel: boolean): void {
     }
     if (m.surfaceC < minT) minT = m.surfaceC;
   }
-  ev.heatFlow = total;
-  ev.governing = gov;
-  ev.maxSurfaceC = maxT;
-  ev.minSurfaceC = minT;
-}
-
-function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][], processC: number): Evaluation {
-  const ev = buildEvaluation(p, thicknesses, coeffs, processC);
-  const g = p.c.geometry;
-  solveEvaluation(ev, g.type === 'vessel' && g.orientation === 'horizontal');
-  return ev;
+  return { models: ms, names, heatFlow: total, governing: gov, maxSurfaceC: maxT, minSurfaceC: minT };
 }
 
 /** Marches the fluid along the run; the single pipe model is re-solved at each local temperature. */
@@ -482,7 +456,7 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
   if (!air.inRange) {
     warnings.push({
       code: 'AIR_PROPERTIES_OUT_OF_RANGE',
-      message: `${label}: film temperature ${(filmK - KELVIN_OFFSET).toFixed(0)} °C is outside the air table (${AIR_TABLE_MIN_K - 273}…${AIR_TABLE_MAX_K - 273} °C); properties were held at the table's end.`,
+      message: `${label}: film temperature ${(filmK - KELVIN_OFFSET).toFixed(0)} °C is outside the air table (${(AIR_TABLE_MIN_K - KELVIN_OFFSET).toFixed(0)}…${(AIR_TABLE_MAX_K - KELVIN_OFFSET).toFixed(0)} °C); properties were held at the table's end.`,
     });
   }
   if (Math.abs(dT) > 1e-3) {
@@ -526,13 +500,13 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
     if (m.forcedKind === FORCED_CYLINDER && Re * air.Pr < REPR_MIN_CYLINDER_CROSSFLOW) {
       warnings.push({
         code: 'CORRELATION_OUT_OF_RANGE',
-        message: `${label}: Churchill–Bernstein Re_D·Pr = ${fmt(Re * air.Pr)} is below its published range (≥ 0.2).`,
+        message: `${label}: Churchill–Bernstein Re_D·Pr = ${fmt(Re * air.Pr)} is below its published range (≥ ${REPR_MIN_CYLINDER_CROSSFLOW}).`,
       });
     }
     if (m.forcedKind === FORCED_PLATE && Re > RE_MAX_FLAT_PLATE) {
       warnings.push({
         code: 'CORRELATION_OUT_OF_RANGE',
-        message: `${label}: flat-plate Re_L = ${fmt(Re)} is above its published range (≤ 1e8).`,
+        message: `${label}: flat-plate Re_L = ${fmt(Re)} is above its published range (≤ ${RE_MAX_FLAT_PLATE.toExponential(0).replace('+', '')}).`,
       });
     }
   }
@@ -624,14 +598,14 @@ export function analyse(input: CalcCase): CalcResult {
   }
 
   const gov = ev.models[ev.governing];
-  const faces = interfaceTemperatures(gov);
+  const partFaces = ev.models.map(interfaceTemperatures);
+  const faces = partFaces[ev.governing];
   // Service temperature: the hottest face of each layer over all parts.
   for (let li = 0; li < thick.length; li++) {
     const layer = c.layers[layerIndex[li]];
     if (layer.maxServiceTemperatureC === undefined) continue;
     let hot = -Infinity;
-    for (const m of ev.models) {
-      const f = interfaceTemperatures(m);
+    for (const f of partFaces) {
       const inner = li === 0 ? f.innerC : f.outerFacesC[li - 1];
       hot = Math.max(hot, inner, f.outerFacesC[li]);
     }

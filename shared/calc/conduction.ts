@@ -168,6 +168,8 @@ export function innerTemperatureFromKirchhoffDrop(coefficients: readonly number[
  * @param field - input path reported in the error
  * @returns nothing; throws {@link CalcInputError} with code CONDUCTIVITY_NOT_POSITIVE
  * @remarks Checks the ends, the stationary point of a quadratic and 32 interior points for higher degree.
+ * @example
+ * assertConductivityPositive([0.04, -0.0002], 0, 300, 'layers[0].conductivity'); // throws: k(300 °C) = −0.02
  */
 export function assertConductivityPositive(coefficients: readonly number[], aC: number, bC: number, field: string): void {
   const lo = Math.min(aC, bC);

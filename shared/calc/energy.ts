@@ -10,6 +10,7 @@
 
 import Decimal from 'decimal.js';
 
+import { requireFinite, requireNonNegativeFinite, requirePositiveFinite } from './checks';
 import { CalcInputError } from './errors';
 import { JOULES_PER_BTU_IT, JOULES_PER_KWH, BTU_PER_THERM } from './units';
 
@@ -18,24 +19,6 @@ const Money = Decimal.clone({ precision: 40, rounding: Decimal.ROUND_HALF_UP });
 
 /** Hours in a (non-leap) year of continuous operation. */
 export const HOURS_PER_YEAR = 8760;
-
-function requirePositiveFinite(value: number, field: string): void {
-  if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) {
-    throw new CalcInputError(field, `${field} must be a positive number`);
-  }
-}
-
-function requireNonNegativeFinite(value: number, field: string): void {
-  if (typeof value !== 'number' || !Number.isFinite(value) || value < 0) {
-    throw new CalcInputError(field, `${field} must be zero or a positive number`);
-  }
-}
-
-function requireFinite(value: number, field: string): void {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new CalcInputError(field, `${field} must be a finite number`);
-  }
-}
 
 /** Annual heat as energy, in the two units reports use. */
 export type AnnualEnergy = {

@@ -27,6 +27,9 @@ function errorItem(e: unknown, prefix: string): CalcErrorItem {
  * @returns a result, or `{ error: { code, field, message } }`; never throws
  * @remarks Codes: INVALID_INPUT, REQUIRED, OUT_OF_RANGE, UNKNOWN_FIELD, CONDUCTIVITY_NOT_POSITIVE,
  * TARGET_NOT_REACHABLE, SERIES_TOO_THIN, CALCULATION_FAILED.
+ * @example
+ * runCase({ geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' }, layers: [] });
+ * // → { error: { code: 'REQUIRED', field: 'processTemperatureC', message: 'processTemperatureC is required.' } }
  */
 export function runCase(input: unknown): CalcOutcome {
   try {
@@ -41,6 +44,9 @@ export function runCase(input: unknown): CalcOutcome {
  *
  * @param inputs - parsed JSON array of cases
  * @returns one outcome per case; never throws
+ * @example
+ * runCases([{}, 1]);
+ * // → [{ error: { code: 'REQUIRED', field: '[0].geometry', … } }, { error: { code: 'INVALID_INPUT', field: '[1]', … } }]
  */
 export function runCases(inputs: unknown[]): CalcOutcome[] {
   const out = new Array<CalcOutcome>(inputs.length);

@@ -15,6 +15,7 @@
  *    calorie, 1 cal_IT = 4.1868 J exactly, from which 1 Btu_IT = 1055.05585262 J exactly.
  */
 
+import { requireFinite } from './checks';
 import { CalcInputError } from './errors';
 
 /** Metres per international inch, exactly (International Yard and Pound Agreement, 1959). */
@@ -42,12 +43,6 @@ export const BTU_PER_THERM = 1e5;
 
 // Watts in one Btu_IT per hour.
 const W_PER_BTU_PER_H = JOULES_PER_BTU_IT / SECONDS_PER_HOUR;
-
-function requireFinite(value: number, field: string): void {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new CalcInputError(field, `${field} must be a finite number`);
-  }
-}
 
 // ---------------------------------------------------------------------------------------------------------
 // Temperature

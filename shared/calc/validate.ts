@@ -4,6 +4,7 @@
  * `layers[0].conductivity`.
  */
 
+import { CONTACT_MATERIALS } from './burn';
 import { CalcInputError } from './errors';
 import type { CalcCase, Criterion, Geometry, Layer } from './types';
 
@@ -185,6 +186,8 @@ const CASE_KEYS = [
  * @returns the validated case, with defaults left absent
  * @remarks Throws {@link CalcInputError} naming the first offending field path. Ranges: process
  * −273…1500 °C, air −100…100 °C, radiant −273…1500 °C, wind 0…100 m/s, emissivity 0…1, RH 0 < RH ≤ 100 %.
+ * @example
+ * validateCase({}); // throws CalcInputError, field 'geometry', code 'REQUIRED'
  */
 export function validateCase(input: unknown): CalcCase {
   const o = object(input, '', CASE_KEYS);
@@ -244,7 +247,7 @@ export function validateCase(input: unknown): CalcCase {
   if (o.contact !== undefined) {
     const k = object(o.contact, 'contact', ['material', 'seconds']);
     c.contact = {
-      material: oneOf(k, 'material', 'contact', ['uncoatedMetal', 'coatedMetal', 'ceramicGlassStone', 'plastic', 'wood'] as const),
+      material: oneOf(k, 'material', 'contact', CONTACT_MATERIALS),
       seconds: num(k, 'seconds', 'contact', { gt: 0, max: 1e6 }, true),
     };
   }

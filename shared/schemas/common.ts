@@ -49,7 +49,7 @@ export const passwordField = () =>
 
 export const roleField = () =>
   yup
-    .string()
+    .string<Role>()
     .strict()
     .oneOf([...ROLES], `Role must be one of ${ROLES.join(', ')}`)
     .required('Role is required');

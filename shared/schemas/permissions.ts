@@ -1,6 +1,6 @@
-import type { Role } from './common';
+import { ROLES, type Role } from './common';
 
-const ALL: readonly Role[] = ['owner', 'engineer', 'safety', 'contractor', 'viewer'];
+const ALL: readonly Role[] = ROLES;
 
 /**
  * Who may do what. The server enforces this table on every route; the app reads it only to hide

@@ -31,19 +31,24 @@ function adoptSession(queryClient: QueryClient, payload: SessionPayload) {
   queryClient.setQueryData(sessionKeys.current(), payload);
 }
 
+/** A mutation whose success starts a new session: signing in, signing up, accepting an invitation. */
+function useSessionStartingMutation<I>(mutationFn: (input: I) => Promise<ApiResult<SessionPayload>>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn,
+    onSuccess: (result: ApiResult<SessionPayload>) => {
+      if (result.kind === 'ok') adoptSession(queryClient, result.data);
+    },
+  });
+}
+
 export interface SignInInput {
   email: string;
   password: string;
 }
 
 export function useSignIn() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: SignInInput) => api.post<SessionPayload>('/auth/signin', input),
-    onSuccess: (result) => {
-      if (result.kind === 'ok') adoptSession(queryClient, result.data);
-    },
-  });
+  return useSessionStartingMutation((input: SignInInput) => api.post<SessionPayload>('/auth/signin', input));
 }
 
 export interface SignUpInput {
@@ -54,13 +59,7 @@ export interface SignUpInput {
 }
 
 export function useSignUp() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: SignUpInput) => api.post<SessionPayload>('/auth/signup', input),
-    onSuccess: (result) => {
-      if (result.kind === 'ok') adoptSession(queryClient, result.data);
-    },
-  });
+  return useSessionStartingMutation((input: SignUpInput) => api.post<SessionPayload>('/auth/signup', input));
 }
 
 export function useSignOut() {
@@ -100,12 +99,7 @@ export function useInvitation(token: string | undefined) {
 }
 
 export function useAcceptInvitation(token: string) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: { name?: string; password?: string }) =>
-      api.post<SessionPayload>(`/invitations/${encodeURIComponent(token)}/accept`, input),
-    onSuccess: (result) => {
-      if (result.kind === 'ok') adoptSession(queryClient, result.data);
-    },
-  });
+  return useSessionStartingMutation((input: { name?: string; password?: string }) =>
+    api.post<SessionPayload>(`/invitations/${encodeURIComponent(token)}/accept`, input),
+  );
 }

@@ -25,7 +25,7 @@ export type EnergyFigures = {
   savingFraction: number | null;
 };
 
-export function basisOf(a: EnergyAssumptions): EnergyBasis | null {
+function basisOf(a: EnergyAssumptions): EnergyBasis | null {
   if (a.operatingHoursPerYear === null || a.efficiency === null || a.pricePerKWh === null || a.co2KgPerKWh === null) return null;
   return {
     operatingHoursPerYear: a.operatingHoursPerYear,

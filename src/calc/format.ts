@@ -68,12 +68,6 @@ export function formatSignificant(quantity: Quantity, si: number, system: UnitSy
   return pack(significant(u.fromSI(si), sig), u.suffix, u.spoken);
 }
 
-/** Any quantity with fixed decimals. */
-export function formatFixed(quantity: Quantity, si: number, system: UnitSystem, decimals: number): Formatted {
-  const u = unitOf(quantity, system);
-  return pack(fixed(u.fromSI(si), decimals), u.suffix, u.spoken);
-}
-
 const EIGHTHS = ['', '⅛', '¼', '⅜', '½', '⅝', '¾', '⅞'];
 const EIGHTHS_SPOKEN = ['', 'one eighth', 'one quarter', 'three eighths', 'one half', 'five eighths', 'three quarters', 'seven eighths'];
 

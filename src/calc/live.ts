@@ -36,14 +36,14 @@ export type LiveOutput =
     };
 
 /** The heat flow of a result in the unit that suits its geometry. */
-export function heatFlowOf(c: CalcCase, r: CalcResult): number {
+function heatFlowOf(c: CalcCase, r: CalcResult): number {
   if (c.geometry.type === 'pipe') return r.heatLossWPerM ?? NaN;
   if (c.geometry.type === 'flat') return r.heatFluxWPerM2 ?? NaN;
   return r.heatLossW ?? NaN;
 }
 
 /** The same case with the outer layer at a given thickness, evaluated as it stands (no solving, no rounding). */
-export function withOuterThickness(c: CalcCase, thicknessM: number): CalcCase {
+function withOuterThickness(c: CalcCase, thicknessM: number): CalcCase {
   const layers = c.layers.map((l, i) => (i === c.layers.length - 1 ? { ...l, thicknessM } : l));
   const { solveFor: _s, round: _r, ...rest } = c;
   return { ...rest, layers };
@@ -76,7 +76,7 @@ function sweep(c: CalcCase, seriesM: readonly number[]): SweepPoint[] {
  * The layers of the build-up the result describes: inner layers as entered and, when sized, the solved
  * layer's rounded thicknesses (possibly split in two), all with the outer layer's material.
  */
-export function evaluatedLayers(c: CalcCase, r: CalcResult): Layer[] {
+function evaluatedLayers(c: CalcCase, r: CalcResult): Layer[] {
   const n = r.interfaceTemperaturesC.length;
   if (!c.solveFor || c.layers.length === 0) return c.layers;
   const outer = c.layers[c.layers.length - 1];
@@ -109,7 +109,7 @@ function temperatureAtFraction(k: readonly number[], tIn: number, tOut: number, 
  * Cylinders follow ln r, flat layers are linear in position, both in the Kirchhoff variable so a k(T)
  * layer curves as it should.
  */
-export function temperatureProfile(c: CalcCase, r: CalcResult): { points: ProfilePoint[]; boundaries: ProfileBoundary[] } {
+function temperatureProfile(c: CalcCase, r: CalcResult): { points: ProfilePoint[]; boundaries: ProfileBoundary[] } {
   const layers = evaluatedLayers(c, r);
   const temps = r.interfaceTemperaturesC;
   const cylindrical = c.geometry.type !== 'flat';
@@ -136,7 +136,7 @@ export function temperatureProfile(c: CalcCase, r: CalcResult): { points: Profil
 }
 
 /** What would help when a target cannot be reached, in plain words. */
-export function adviceFor(d: Draft): string[] {
+function adviceFor(d: Draft): string[] {
   switch (d.purpose) {
     case 'personnel':
       return [

@@ -27,7 +27,7 @@ export function heatQuantity(kind: Draft['kind']): Quantity {
 }
 
 /** Per metre / per m² / per vessel, carried to per foot / per ft² in US units. */
-export function energyBasisOf(kind: Draft['kind'], system: UnitSystem): { factor: number; label: string } {
+function energyBasisOf(kind: Draft['kind'], system: UnitSystem): { factor: number; label: string } {
   if (kind === 'pipe') return system === 'US' ? { factor: 0.3048, label: 'per foot of pipe, per year' } : { factor: 1, label: 'per metre of pipe, per year' };
   if (kind === 'wall') return system === 'US' ? { factor: 0.09290304, label: 'per square foot, per year' } : { factor: 1, label: 'per square metre, per year' };
   return { factor: 1, label: 'for the whole vessel, per year' };

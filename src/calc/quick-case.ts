@@ -111,7 +111,7 @@ export const CONTACT_MATERIALS: { id: ContactMaterial; label: string }[] = [
 
 const DEFAULT_SERIES = 'metric';
 
-export function defaultEnergy(): EnergyAssumptions {
+function defaultEnergy(): EnergyAssumptions {
   return {
     seriesId: DEFAULT_SERIES,
     operatingHoursPerYear: 8000,
@@ -186,7 +186,7 @@ export class DraftIncomplete extends Error {
   }
 }
 
-export function geometryOf(d: Draft): Geometry {
+function geometryOf(d: Draft): Geometry {
   if (d.kind === 'pipe') {
     const g: Geometry = { type: 'pipe', outerDiameterM: must(d.pipeOuterDiameterM, 'pipeOuterDiameterM'), orientation: d.pipeOrientation };
     if (d.pipeOrientation === 'vertical') g.heightM = must(d.pipeHeightM, 'pipeHeightM');
@@ -206,7 +206,7 @@ export function geometryOf(d: Draft): Geometry {
 }
 
 /** The purpose as a solve criterion (SI). */
-export function criterionOf(d: Draft): Criterion {
+function criterionOf(d: Draft): Criterion {
   switch (d.purpose) {
     case 'personnel':
       return { criterion: 'surfaceTemperature', maxC: must(d.maxSurfaceC, 'maxSurfaceC') };
@@ -224,7 +224,7 @@ export function criterionOf(d: Draft): Criterion {
 }
 
 /** The build-up as contract layers (SI); every coefficient must be present. */
-export function layersOf(d: Draft): Layer[] {
+function layersOf(d: Draft): Layer[] {
   return d.layers.map((l, i) => {
     const conductivity = l.conductivity.map((c, j) => must(c, `layers[${i}].conductivity[${j}]`));
     while (conductivity.length > 1 && conductivity[conductivity.length - 1] === 0) conductivity.pop();
@@ -413,8 +413,6 @@ export function draftFromCase(c: CalcCase, o: DraftOptions = {}): Draft {
   }
   return d;
 }
-
-export type Verdict = { state: 'pass' | 'fail' | 'unknown'; detail: string };
 
 /** Whether a result meets the purpose's limit (for checking mode and the sized build-up alike). */
 export function meetsPurpose(d: Draft, r: CalcResult): boolean | null {

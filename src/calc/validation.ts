@@ -38,7 +38,7 @@ function numberRule(r: Rule, system: UnitSystem) {
 const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
 /** The rules that apply to this draft (geometry and purpose decide which fields matter). */
-export function rulesFor(d: Draft): Record<string, Rule> {
+function rulesFor(d: Draft): Record<string, Rule> {
   const rules: Record<string, Rule> = {
     processTemperatureC: { label: 'the process temperature', quantity: 'temperature', min: -273, max: 1200 },
     emissivity: { label: 'the emissivity', quantity: 'ratio', min: 0.02, max: 1 },

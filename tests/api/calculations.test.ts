@@ -1,17 +1,8 @@
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { createCalcPool } from '../../server/calculations/calc-pool';
+import { CONTRACT_EXAMPLE_CASE as CASE } from '../helpers/contract-case';
 import { startTestServer, type TestServer } from '../helpers/test-server';
-
-const CASE = {
-  geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
-  processTemperatureC: 250,
-  layers: [{ thicknessM: 0.05, conductivity: [0.035, 0.00015], maxServiceTemperatureC: 650 }],
-  surfaceEmissivity: 0.1,
-  ambient: { airTemperatureC: 30, radiantTemperatureC: 30, windSpeedMS: 0, relativeHumidityPct: 60 },
-  solveFor: { criterion: 'surfaceTemperature', maxC: 60 },
-  round: { seriesM: [0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
-};
 
 jest.setTimeout(60_000);
 

@@ -10,6 +10,7 @@ import {
   assertNoPageErrors,
   assertOnlyLoopback,
   assertWebAppBuilt,
+  fill,
   gotoApp,
   openBrowser,
   screenshot,
@@ -37,12 +38,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await server?.close();
 });
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.click();
-  await input.fill(value);
-}
 
 async function signOut(page: Page) {
   await page.getByRole('link', { name: 'Settings' }).click();

@@ -212,6 +212,13 @@ export async function gotoApp(page: Page, url: string): Promise<void> {
 }
 
 /** A name for screenshots and addresses that differs per viewport: "390x844". */
+/** Clicks into the field with this testID and replaces its text, as a person would. */
+export async function fill(page: Page, testId: string, value: string): Promise<void> {
+  const input = page.getByTestId(testId);
+  await input.click();
+  await input.fill(value);
+}
+
 export function viewportTag(v: Viewport): string {
   return `${v.width}x${v.height}`;
 }

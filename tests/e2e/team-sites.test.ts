@@ -14,6 +14,7 @@ import {
   assertNoPageErrors,
   assertOnlyLoopback,
   assertWebAppBuilt,
+  fill,
   gotoApp,
   openBrowser,
   screenshot,
@@ -33,12 +34,6 @@ const user = (role: string) => {
   if (!u) throw new Error(`No demo ${role}`);
   return u;
 };
-
-async function fill(page: Page, testId: string, value: string) {
-  const input = page.getByTestId(testId);
-  await input.click();
-  await input.fill(value);
-}
 
 /**
  * Signs out by forgetting the cookie. The page is left first: a request still in flight from the old

@@ -5,7 +5,7 @@ import type { Config } from '../../server/config';
 import { createMailer, type Mailer } from '../../server/mail/mailer';
 import type { Role } from '../../shared/schemas/common';
 import { createTestDatabase } from './test-db';
-import { startTestMail, type TestMail } from './mail';
+import { startTestMail, tokenFromMail, type TestMail } from './mail';
 import { testConfig } from './test-config';
 
 export type Agent = ReturnType<typeof request.agent> & { csrf: string };
@@ -83,7 +83,7 @@ export async function addMember(ctx: ApiContext, owner: Agent, role: Role) {
   const email = uniqueEmail(role);
   await owner.post('/api/v1/team/invitations').set('X-CSRF-Token', owner.csrf).send({ email, role }).expect(201);
   const mail = await ctx.mail.waitFor(email, { subject: /invited/i });
-  const token = new URL(mail.text.match(/https?:\/\/\S+/)![0]).searchParams.get('token')!;
+  const { token } = tokenFromMail(mail);
   const agent = await ctx.agent();
   const res = await agent
     .post(`/api/v1/invitations/${token}/accept`)

@@ -3,7 +3,7 @@
  * 1 atm), kept here so reference tests recompute correlations without the package's own property code.
  * Columns: T [K], k [W/(m·K)], ν [m²/s], Pr [-].
  */
-const ROWS: Array<[number, number, number, number]> = [
+const ROWS: [number, number, number, number][] = [
   [250, 0.0223, 11.44e-6, 0.72],
   [300, 0.0263, 15.89e-6, 0.707],
   [350, 0.03, 20.92e-6, 0.7],

@@ -17,7 +17,7 @@ describe('dew point, Magnus (Alduchov & Eskridge 1996), against psychrolib', () 
     expect(Math.abs(dewPointC(30, 60) - 21.388)).toBeLessThan(0.05);
   });
 
-  const cases: Array<[number, number]> = [
+  const cases: [number, number][] = [
     [5, 90],
     [10, 80],
     [20, 50],

@@ -1,14 +1,5 @@
-import { analyse, type CalcCase } from '../../shared/calc';
-
-const designCase: CalcCase = {
-  geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
-  processTemperatureC: 250,
-  layers: [{ thicknessM: 0.05, conductivity: [0.035, 0.00015], maxServiceTemperatureC: 650 }],
-  surfaceEmissivity: 0.1,
-  ambient: { airTemperatureC: 30, radiantTemperatureC: 30, windSpeedMS: 0, relativeHumidityPct: 60 },
-  solveFor: { criterion: 'surfaceTemperature', maxC: 60 },
-  round: { seriesM: [0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
-};
+import { analyse } from '../../shared/calc';
+import { CONTRACT_EXAMPLE_CASE as designCase } from '../helpers/contract-case';
 
 describe('insulated steam pipe', () => {
   it('when the contract example (4" pipe at 250 °C, ε 0.1, surface ≤ 60 °C) is solved and rounded, then it reproduces the independent model', () => {

@@ -8,7 +8,7 @@ import { useAcceptInvitation, useInvitation } from '../../api/session';
 import { roleDescriptions, roleLabels } from '../../api/types';
 import { colors, radius, spacing } from '../../theme';
 import { useHydrated } from '../common/use-hydrated';
-import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
+import { applyProblem, FormErrorBanner, FormTextField, trimStrings, validateWithSchema } from '../forms';
 import { Banner, Button, Text, TextLink } from '../ui';
 
 import { AuthFrame, PASSWORD_HINT } from './auth-frame';
@@ -89,7 +89,7 @@ export function AcceptInviteForm({ token }: { token: string | undefined }) {
       >
         {(form) => (
           <View style={styles.form}>
-            {(form.status as FormStatus)?.error ? <Banner tone="fail" title="Could not join">{(form.status as FormStatus)!.error}</Banner> : null}
+            <FormErrorBanner status={form.status} title="Could not join" />
             <FormTextField form={form} name="name" label="Your name" autoComplete="name" testID="accept-name" />
             <FormTextField form={form} name="password" label="Choose a password" password hint={PASSWORD_HINT} autoComplete="new-password" testID="accept-password" />
             <Button label={`Join ${inv.teamName}`} busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="accept-submit" />

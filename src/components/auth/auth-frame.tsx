@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
-import { colors, spacing } from '../../theme';
-import { Card, Screen, Text } from '../ui';
+import { spacing } from '../../theme';
+import { BrandMark, Card, PageTitle, Screen, Text } from '../ui';
 
 export interface AuthFrameProps {
   title: string;
@@ -16,9 +16,7 @@ export function AuthFrame({ title, intro, children, footer }: AuthFrameProps) {
   return (
     <Screen width="narrow">
       <View style={styles.brand}>
-        <View style={styles.mark} aria-hidden>
-          <View style={styles.markBand} />
-        </View>
+        <BrandMark size={40} />
         <View>
           <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
             Lagline
@@ -29,12 +27,7 @@ export function AuthFrame({ title, intro, children, footer }: AuthFrameProps) {
         </View>
       </View>
       <Card>
-        <View style={styles.head}>
-          <Text variant="heading" role="heading" aria-level={1}>
-            {title}
-          </Text>
-          {intro ? <Text tone="textMuted">{intro}</Text> : null}
-        </View>
+        <PageTitle title={title} intro={intro} />
         {children}
       </Card>
       {footer ? <View style={styles.footer}>{footer}</View> : null}
@@ -46,15 +39,5 @@ export const PASSWORD_HINT = 'At least 12 characters. Passphrases welcome: a few
 
 const styles = StyleSheet.create({
   brand: { flexDirection: 'row', alignItems: 'center', gap: spacing.md, marginTop: spacing.lg },
-  mark: {
-    width: 40,
-    height: 40,
-    borderRadius: 10,
-    backgroundColor: colors.text,
-    justifyContent: 'center',
-    paddingHorizontal: 6,
-  },
-  markBand: { height: 9, borderRadius: 2, backgroundColor: colors.heatLine },
-  head: { gap: spacing.xs },
   footer: { gap: spacing.sm, alignItems: 'center' },
 });

@@ -5,7 +5,7 @@ import { passwordResetRequestSchema } from '../../../shared/schemas';
 import { problemMessage } from '../../api/client';
 import { useRequestPasswordReset } from '../../api/session';
 import { spacing } from '../../theme';
-import { FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
+import { FormErrorBanner, type FormStatus, FormTextField, trimStrings, validateWithSchema } from '../forms';
 import { Banner, Button, TextLink } from '../ui';
 
 import { AuthFrame } from './auth-frame';
@@ -44,7 +44,7 @@ export function ForgotPasswordForm() {
           }
           return (
             <View style={styles.form}>
-              {status?.error ? <Banner tone="fail">{status.error}</Banner> : null}
+              <FormErrorBanner status={status} />
               <FormTextField form={form} name="email" label="E-mail address" autoComplete="email" inputMode="email" autoCapitalize="none" onSubmitEditing={() => form.handleSubmit()} testID="forgot-email" />
               <Button label="Send reset link" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="forgot-submit" />
             </View>

@@ -6,7 +6,7 @@ import { problemMessage } from '../../api/client';
 import { useConfirmPasswordReset } from '../../api/session';
 import { spacing } from '../../theme';
 import { useHydrated } from '../common/use-hydrated';
-import { FormTextField, validateWithSchema, type FormErrors, type FormStatus } from '../forms';
+import { FormErrorBanner, type FormErrors, type FormStatus, FormTextField, validateWithSchema } from '../forms';
 import { Banner, Button, TextLink } from '../ui';
 
 import { AuthFrame, PASSWORD_HINT } from './auth-frame';
@@ -68,7 +68,7 @@ export function ResetPasswordForm({ token }: { token: string | undefined }) {
           }
           return (
             <View style={styles.form}>
-              {status?.error ? <Banner tone="fail">{status.error}</Banner> : null}
+              <FormErrorBanner status={status} />
               <FormTextField form={form} name="password" label="New password" password hint={PASSWORD_HINT} autoComplete="new-password" testID="reset-password" />
               <FormTextField form={form} name="confirm" label="New password again" password autoComplete="new-password" testID="reset-confirm" />
               <Button label="Save new password" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="reset-submit" />

@@ -5,8 +5,8 @@ import { StyleSheet, View } from 'react-native';
 import { signInSchema } from '../../../shared/schemas';
 import { useSignIn } from '../../api/session';
 import { spacing } from '../../theme';
-import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
-import { Banner, Button, Text, TextLink } from '../ui';
+import { applyProblem, FormErrorBanner, FormTextField, trimStrings, validateWithSchema } from '../forms';
+import { Button, Text, TextLink } from '../ui';
 
 import { AuthFrame } from './auth-frame';
 
@@ -47,7 +47,7 @@ export function SignInForm() {
       >
         {(form) => (
           <View style={styles.form}>
-            {(form.status as FormStatus)?.error ? <Banner tone="fail" title="Could not sign in">{(form.status as FormStatus)!.error}</Banner> : null}
+            <FormErrorBanner status={form.status} title="Could not sign in" />
             <FormTextField form={form} name="email" label="E-mail address" autoComplete="email" inputMode="email" autoCapitalize="none" testID="signin-email" />
             <FormTextField form={form} name="password" label="Password" password autoComplete="current-password" testID="signin-password" onSubmitEditing={() => form.handleSubmit()} />
             <Button label="Sign in" busy={form.isSubmitting} onPress={() => form.handleSubmit()} block testID="signin-submit" />

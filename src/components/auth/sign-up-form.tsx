@@ -5,8 +5,8 @@ import { StyleSheet, View } from 'react-native';
 import { signUpSchema } from '../../../shared/schemas';
 import { useSignUp } from '../../api/session';
 import { spacing } from '../../theme';
-import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
-import { Banner, Button, Text, TextLink } from '../ui';
+import { applyProblem, FormErrorBanner, FormTextField, trimStrings, validateWithSchema } from '../forms';
+import { Button, Text, TextLink } from '../ui';
 
 import { AuthFrame, PASSWORD_HINT } from './auth-frame';
 
@@ -41,7 +41,7 @@ export function SignUpForm() {
       >
         {(form) => (
           <View style={styles.form}>
-            {(form.status as FormStatus)?.error ? <Banner tone="fail" title="Could not create the team">{(form.status as FormStatus)!.error}</Banner> : null}
+            <FormErrorBanner status={form.status} title="Could not create the team" />
             <FormTextField form={form} name="teamName" label="Team name" hint="Usually the plant or company, e.g. North Ridge Works." testID="signup-team" />
             <FormTextField form={form} name="name" label="Your name" autoComplete="name" testID="signup-name" />
             <FormTextField form={form} name="email" label="E-mail address" autoComplete="email" inputMode="email" autoCapitalize="none" testID="signup-email" />

@@ -1,3 +1,4 @@
 export * from './form-text-field';
 export * from './server-errors';
 export * from './validate';
+export * from './form-error-banner';

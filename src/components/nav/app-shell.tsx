@@ -4,7 +4,7 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { breakpoints, colors, radius, spacing } from '../../theme';
 import { useHydrated } from '../common/use-hydrated';
-import { Icon, Text } from '../ui';
+import { BrandMark, Icon, Text } from '../ui';
 
 import { destinations, isActive } from './destinations';
 
@@ -35,9 +35,7 @@ export function AppShell({ teamName, userName, navigation = true, children }: Ap
   const rail = (
     <View role="navigation" aria-label="Main" style={[styles.rail, { paddingTop: insets.top + spacing.xl }]}>
       <View style={styles.railBrand}>
-        <View style={styles.mark} aria-hidden>
-          <View style={styles.markBand} />
-        </View>
+        <BrandMark size={32} />
         <View style={styles.railBrandText}>
           <Text variant="title" weight="bold" role={undefined} aria-level={undefined}>
             Lagline
@@ -119,8 +117,6 @@ const styles = StyleSheet.create({
   },
   railBrand: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm, paddingHorizontal: spacing.sm },
   railBrandText: { flexShrink: 1 },
-  mark: { width: 32, height: 32, borderRadius: 8, backgroundColor: colors.text, justifyContent: 'center', paddingHorizontal: 5 },
-  markBand: { height: 7, borderRadius: 2, backgroundColor: colors.heatLine },
   railItems: { gap: spacing.xxs },
   railItem: {
     flexDirection: 'row',

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { conductivityCoefficientsFromDisplay, conductivityCoefficientsToDisplay, formatInputNumber, parseNumber, type UnitSystem } from '../../calc/units';
+import { conductivityCoefficientsFromDisplay, conductivityCoefficientsToDisplay, formatInputNumber, parseNumber, unitOf, type UnitSystem } from '../../calc/units';
 import { spacing } from '../../theme';
 import { Text, TextField } from '../ui';
 
@@ -34,11 +34,15 @@ export function CoefficientFields({ layer, system, value, onChange, errors, test
   }
   const texts = shown.texts;
 
-  const k = system === 'US' ? 'Btu·in/(h·ft²·°F)' : 'W/(m·K)';
-  const T = system === 'US' ? '°F' : '°C';
+  const kUnit = unitOf('conductivity', system);
+  const tUnit = unitOf('temperature', system);
+  const k = kUnit.suffix;
+  const T = tUnit.suffix;
   const pow = (j: number) => (j === 1 ? '' : j === 2 ? '²' : j === 3 ? '³' : `^${j}`);
+  const spokenPow = (j: number) => (j === 1 ? '' : j === 2 ? ' squared' : j === 3 ? ' cubed' : ` to the power ${j}`);
   const labels = texts.map((_, j) => (j === 0 ? `k at 0 ${T}` : `c${j}, per ${T}${pow(j)}`));
   const units = texts.map((_, j) => (j === 0 ? k : `${k}/${T}${pow(j)}`));
+  const unitsSpoken = texts.map((_, j) => (j === 0 ? kUnit.spoken : `${kUnit.spoken} per ${tUnit.spoken}${spokenPow(j)}`));
 
   return (
     <View style={styles.wrap}>
@@ -51,6 +55,7 @@ export function CoefficientFields({ layer, system, value, onChange, errors, test
             <TextField
               label={`${labels[j]}, layer ${layer}`}
               unit={units[j]}
+              unitSpoken={unitsSpoken[j]}
               value={text}
               inputMode="decimal"
               error={errors[j]}

@@ -12,14 +12,14 @@ import {
   type Num,
 } from '../../calc/quick-case';
 import type { FieldErrors } from '../../calc/validation';
-import type { Quantity, UnitSystem } from '../../calc/units';
+import { unitOf, type Quantity, type UnitSystem } from '../../calc/units';
 import { spacing } from '../../theme';
 import { Button, Card, Text, TextField } from '../ui';
 
 import { CoefficientFields } from './coefficient-fields';
 import { NumberField } from './number-field';
-import { OptionChips } from './option-chips';
-import { SelectField } from './select-field';
+import { OptionChips, type ChipOption } from './option-chips';
+import { SelectField, type SelectOption } from './select-field';
 
 export interface InputsPanelProps {
   draft: Draft;
@@ -29,6 +29,70 @@ export interface InputsPanelProps {
 }
 
 const MAX_LAYERS = 3;
+
+type EnergyNumberKey = 'operatingHoursPerYear' | 'pricePerKWh' | 'efficiency' | 'co2KgPerKWh';
+
+type Options<K extends keyof Draft> = readonly ChipOption<Draft[K] & string>[];
+
+const KIND_OPTIONS: Options<'kind'> = [
+  { value: 'pipe', label: 'Pipe' },
+  { value: 'vessel', label: 'Vessel' },
+  { value: 'wall', label: 'Wall or flat surface' },
+];
+const SIZE_BY_OPTIONS: Options<'pipeSizeBy'> = [
+  { value: 'nps', label: 'NPS' },
+  { value: 'dn', label: 'DN' },
+  { value: 'od', label: 'Outside diameter' },
+];
+const PIPE_ORIENTATION_OPTIONS: Options<'pipeOrientation'> = [
+  { value: 'horizontal', label: 'Horizontal' },
+  { value: 'vertical', label: 'Vertical' },
+];
+const VESSEL_ORIENTATION_OPTIONS: Options<'vesselOrientation'> = [
+  { value: 'vertical', label: 'Vertical' },
+  { value: 'horizontal', label: 'Horizontal' },
+];
+const HEAD_OPTIONS: Options<'headType'> = [
+  { value: 'ellipsoidal2to1', label: '2:1 ellipsoidal' },
+  { value: 'hemispherical', label: 'Hemispherical' },
+  { value: 'flat', label: 'Flat' },
+];
+const WALL_ORIENTATION_OPTIONS: Options<'wallOrientation'> = [
+  { value: 'vertical', label: 'Sideways (a vertical wall)' },
+  { value: 'faceUp', label: 'Up (a roof or top)' },
+  { value: 'faceDown', label: 'Down (an underside)' },
+];
+const MODE_OPTIONS: Options<'mode'> = [
+  { value: 'size', label: 'The thickness needed' },
+  { value: 'check', label: 'Whether this build-up is enough' },
+];
+const CONTACT_OPTIONS: Options<'contactMaterial'> = CONTACT_MATERIALS.map((c) => ({ value: c.id, label: c.label }));
+const CURRENCY_OPTIONS: readonly ChipOption<string>[] = [
+  { value: 'USD', label: 'USD $' },
+  { value: 'EUR', label: 'EUR €' },
+  { value: 'GBP', label: 'GBP £' },
+];
+
+const MATERIAL_OPTIONS: readonly SelectOption[] = [
+  ...materials.map((m) => ({ value: m.id, label: m.name, detail: m.maxServiceTemperatureC !== undefined ? `Service to ${m.maxServiceTemperatureC} °C` : undefined })),
+  { value: 'custom', label: 'Custom k(T)', detail: 'Enter the conductivity polynomial yourself' },
+];
+const FINISH_OPTIONS: readonly SelectOption[] = [
+  ...finishes.map((f) => ({ value: f.id, label: f.name, detail: `Emissivity ${f.emissivity}` })),
+  { value: 'custom', label: 'Custom emissivity' },
+];
+const SERIES_OPTIONS: readonly SelectOption[] = thicknessSeries.map((s) => ({ value: s.id, label: s.name }));
+
+/** The limit field of each purpose, keyed by the draft field it fills. */
+const LIMIT_FIELDS: Partial<Record<keyof Draft, { label: string; quantity: Quantity; hint?: string }>> = {
+  maxSurfaceC: { label: 'Highest surface temperature allowed', quantity: 'temperature', hint: 'Often 55–60 °C for metal jackets within reach; your plant’s specification governs.' },
+  maxHeatLossWPerM: { label: 'Most heat loss allowed per length', quantity: 'heatLossPerLength' },
+  maxHeatFluxWPerM2: { label: 'Most heat loss allowed per area', quantity: 'heatFlux' },
+  maxHeatLossW: { label: 'Most heat loss allowed, whole vessel', quantity: 'heatFlow' },
+  condensationMarginK: { label: 'Margin above the dew point', quantity: 'temperatureDelta' },
+  maxChangeK: { label: 'Largest temperature drop along the run', quantity: 'temperatureDelta' },
+  minHours: { label: 'Hours the standing water must stay above 0 °C', quantity: 'hours' },
+};
 
 /** Every input of the quick-sizing case, grouped the way a person thinks about the job. */
 export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelProps) {
@@ -44,9 +108,26 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
       testID={extra?.testID ?? `qs-input-${String(key)}`}
     />
   );
+  const energyNum = (key: EnergyNumberKey, label: string, quantity: Quantity, unitPrefix?: string) => (
+    <NumberField
+      label={label}
+      quantity={quantity}
+      unitPrefix={unitPrefix}
+      system={system}
+      value={d.energy[key]}
+      onChange={(v) => onChange({ energy: { ...d.energy, [key]: v } })}
+      error={errors[`energy.${key}`]}
+      testID={`qs-input-energy.${key}`}
+    />
+  );
+  const odUnit = unitOf('diameter', system);
+  const limit = limitKey(d);
+  const limitField = LIMIT_FIELDS[limit];
 
   const setLayer = (i: number, patch: Partial<LayerDraft>) => onChange({ layers: d.layers.map((l, j) => (j === i ? { ...l, ...patch } : l)) });
-  const solvedIndex = d.mode === 'size' && purposeAvailable(d.purpose, d.kind) ? d.layers.length - 1 : -1;
+  const available = purposeAvailable(d.purpose, d.kind);
+  const purpose = PURPOSES.find((p) => p.id === d.purpose);
+  const solvedIndex = d.mode === 'size' && available ? d.layers.length - 1 : -1;
 
   return (
     <View style={styles.col}>
@@ -55,11 +136,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           label="Shape"
           value={d.kind}
           testID="qs-kind"
-          options={[
-            { value: 'pipe', label: 'Pipe' },
-            { value: 'vessel', label: 'Vessel' },
-            { value: 'wall', label: 'Wall or flat surface' },
-          ]}
+          options={KIND_OPTIONS}
           onChange={(kind) => onChange({ kind })}
         />
         {d.kind === 'pipe' ? (
@@ -68,11 +145,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
               label="Pipe size given as"
               value={d.pipeSizeBy}
               testID="qs-size-by"
-              options={[
-                { value: 'nps', label: 'NPS' },
-                { value: 'dn', label: 'DN' },
-                { value: 'od', label: 'Outside diameter' },
-              ]}
+              options={SIZE_BY_OPTIONS}
               onChange={(pipeSizeBy) => {
                 const known = d.pipeOuterDiameterM !== null ? pipeSizeByOuterDiameter(d.pipeOuterDiameterM) : undefined;
                 const fallback = pipeSizes.find((p) => p.nps === '4');
@@ -90,7 +163,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                 options={pipeSizes.map((p) => ({
                   value: String(p.outerDiameterM),
                   label: d.pipeSizeBy === 'nps' ? `NPS ${p.nps}` : `DN ${p.dn}`,
-                  detail: `${system === 'US' ? `${(p.outerDiameterM / 0.0254).toFixed(3)} in` : `${(p.outerDiameterM * 1000).toFixed(1)} mm`} outside (ASME B36.10M)`,
+                  detail: `${odUnit.fromSI(p.outerDiameterM).toFixed(system === 'US' ? 3 : 1)} ${odUnit.suffix} outside (ASME B36.10M)`,
                 }))}
                 onChange={(v) => onChange(sizePatch(Number(v)))}
               />
@@ -99,10 +172,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
               label="Run"
               value={d.pipeOrientation}
               testID="qs-pipe-orientation"
-              options={[
-                { value: 'horizontal', label: 'Horizontal' },
-                { value: 'vertical', label: 'Vertical' },
-              ]}
+              options={PIPE_ORIENTATION_OPTIONS}
               onChange={(pipeOrientation) => onChange({ pipeOrientation })}
             />
             {d.pipeOrientation === 'vertical' ? num('pipeHeightM', 'Height of the vertical run', 'length') : null}
@@ -116,21 +186,14 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
               label="Axis"
               value={d.vesselOrientation}
               testID="qs-vessel-orientation"
-              options={[
-                { value: 'vertical', label: 'Vertical' },
-                { value: 'horizontal', label: 'Horizontal' },
-              ]}
+              options={VESSEL_ORIENTATION_OPTIONS}
               onChange={(vesselOrientation) => onChange({ vesselOrientation })}
             />
             <OptionChips
               label="Heads"
               value={d.headType}
               testID="qs-head-type"
-              options={[
-                { value: 'ellipsoidal2to1', label: '2:1 ellipsoidal' },
-                { value: 'hemispherical', label: 'Hemispherical' },
-                { value: 'flat', label: 'Flat' },
-              ]}
+              options={HEAD_OPTIONS}
               onChange={(headType) => onChange({ headType })}
             />
           </>
@@ -141,11 +204,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
               label="The surface faces"
               value={d.wallOrientation}
               testID="qs-wall-orientation"
-              options={[
-                { value: 'vertical', label: 'Sideways (a vertical wall)' },
-                { value: 'faceUp', label: 'Up (a roof or top)' },
-                { value: 'faceDown', label: 'Down (an underside)' },
-              ]}
+              options={WALL_ORIENTATION_OPTIONS}
               onChange={(wallOrientation) => onChange({ wallOrientation })}
             />
             {d.wallOrientation === 'vertical'
@@ -166,10 +225,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                 label={`Material, layer ${i + 1}`}
                 testID={`qs-input-layers[${i}].material`}
                 value={l.materialId}
-                options={[
-                  ...materials.map((m) => ({ value: m.id, label: m.name, detail: m.maxServiceTemperatureC !== undefined ? `Service to ${m.maxServiceTemperatureC} °C` : undefined })),
-                  { value: 'custom', label: 'Custom k(T)', detail: 'Enter the conductivity polynomial yourself' },
-                ]}
+                options={MATERIAL_OPTIONS}
                 onChange={(id) => {
                   const m = materialById(id);
                   if (m) setLayer(i, { materialId: id, conductivity: [...m.conductivity], maxServiceTemperatureC: m.maxServiceTemperatureC ?? null });
@@ -236,10 +292,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           label="Outer finish"
           testID="qs-input-finish"
           value={d.finishId}
-          options={[
-            ...finishes.map((f) => ({ value: f.id, label: f.name, detail: `Emissivity ${f.emissivity}` })),
-            { value: 'custom', label: 'Custom emissivity' },
-          ]}
+          options={FINISH_OPTIONS}
           onChange={(id) => {
             const f = finishById(id);
             onChange(f ? { finishId: id, emissivity: f.emissivity } : { finishId: 'custom' });
@@ -264,29 +317,26 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
             value: p.id,
             label: p.label,
             disabled: !purposeAvailable(p.id, d.kind),
-            note: !purposeAvailable(p.id, d.kind) ? 'pipes only' : undefined,
+            note: purposeAvailable(p.id, d.kind) ? undefined : 'pipes only',
           }))}
           onChange={(purpose) => onChange({ purpose })}
         />
         <Text tone="textMuted" testID="qs-purpose-hint">
-          {`${PURPOSES.find((p) => p.id === d.purpose)?.hint ?? ''} (${PURPOSE_TRADE_TERMS[d.purpose]})`}
+          {`${purpose?.hint ?? ''} (${PURPOSE_TRADE_TERMS[d.purpose]})`}
         </Text>
-        {!purposeAvailable(d.purpose, d.kind) ? (
+        {!available ? (
           <Text tone="caution" testID="qs-purpose-unavailable">
-            {`Caution: ${PURPOSES.find((p) => p.id === d.purpose)?.label} is worked out for pipes (flow along a run, or water standing in it). For a ${d.kind === 'vessel' ? 'vessel' : 'wall'}, choose another purpose; the build-up below is checked as entered.`}
+            {`Caution: ${purpose?.label} is worked out for pipes (flow along a run, or water standing in it). For a ${d.kind === 'vessel' ? 'vessel' : 'wall'}, choose another purpose; the build-up below is checked as entered.`}
           </Text>
         ) : null}
         <OptionChips
           label="Work out"
           value={d.mode}
           testID="qs-mode"
-          options={[
-            { value: 'size', label: 'The thickness needed' },
-            { value: 'check', label: 'Whether this build-up is enough' },
-          ]}
+          options={MODE_OPTIONS}
           onChange={(mode) => onChange({ mode })}
         />
-        {purposeAvailable(d.purpose, d.kind) ? limitField(d, system, errors, onChange) : null}
+        {available && limitField ? num(limit, limitField.label, limitField.quantity, { hint: limitField.hint, testID: 'qs-input-limit' }) : null}
         {d.kind === 'pipe' && d.purpose === 'holding' ? (
           <>
             {num('runLengthM', 'Length of the run', 'length')}
@@ -304,7 +354,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           label="If someone touches the surface, it is"
           value={d.contactMaterial}
           testID="qs-contact"
-          options={CONTACT_MATERIALS.map((c) => ({ value: c.id, label: c.label }))}
+          options={CONTACT_OPTIONS}
           onChange={(contactMaterial) => onChange({ contactMaterial })}
         />
         {num('contactSeconds', 'Contact time', 'seconds', { hint: '5 s is the usual industrial basis; longer contact lowers the burn threshold.' })}
@@ -315,24 +365,20 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           label="Thickness series"
           testID="qs-input-series"
           value={d.energy.seriesId}
-          options={thicknessSeries.map((s) => ({ value: s.id, label: s.name }))}
+          options={SERIES_OPTIONS}
           onChange={(seriesId) => onChange({ energy: { ...d.energy, seriesId } })}
         />
-        <NumberField label="Operating hours per year" quantity="hours" system={system} value={d.energy.operatingHoursPerYear} onChange={(v) => onChange({ energy: { ...d.energy, operatingHoursPerYear: v } })} error={errors['energy.operatingHoursPerYear']} testID="qs-input-energy.operatingHoursPerYear" />
+        {energyNum('operatingHoursPerYear', 'Operating hours per year', 'hours')}
         <OptionChips
           label="Currency"
           value={d.energy.currency}
           testID="qs-currency"
-          options={[
-            { value: 'USD', label: 'USD $' },
-            { value: 'EUR', label: 'EUR €' },
-            { value: 'GBP', label: 'GBP £' },
-          ]}
+          options={CURRENCY_OPTIONS}
           onChange={(currency) => onChange({ energy: { ...d.energy, currency } })}
         />
-        <NumberField label="Energy price (fuel as bought)" quantity="pricePerEnergy" unitPrefix={currencySymbol(d.energy.currency)} system={system} value={d.energy.pricePerKWh} onChange={(v) => onChange({ energy: { ...d.energy, pricePerKWh: v } })} error={errors['energy.pricePerKWh']} testID="qs-input-energy.pricePerKWh" />
-        <NumberField label="Heat-source efficiency" quantity="fraction" system={system} value={d.energy.efficiency} onChange={(v) => onChange({ energy: { ...d.energy, efficiency: v } })} error={errors['energy.efficiency']} testID="qs-input-energy.efficiency" />
-        <NumberField label="CO₂ factor of the fuel" quantity="co2Factor" system={system} value={d.energy.co2KgPerKWh} onChange={(v) => onChange({ energy: { ...d.energy, co2KgPerKWh: v } })} error={errors['energy.co2KgPerKWh']} testID="qs-input-energy.co2KgPerKWh" />
+        {energyNum('pricePerKWh', 'Energy price (fuel as bought)', 'pricePerEnergy', currencySymbol(d.energy.currency))}
+        {energyNum('efficiency', 'Heat-source efficiency', 'fraction')}
+        {energyNum('co2KgPerKWh', 'CO₂ factor of the fuel', 'co2Factor')}
         <TextField label="Basis of the CO₂ factor" value={d.energy.co2Basis} onChangeText={(co2Basis) => onChange({ energy: { ...d.energy, co2Basis } })} testID="qs-input-energy.co2Basis" />
       </Card>
     </View>
@@ -347,33 +393,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
   }
 }
 
-function limitField(d: Draft, system: UnitSystem, errors: FieldErrors, onChange: (p: Partial<Draft>) => void) {
-  const key = limitKey(d);
-  const spec: Record<string, { label: string; quantity: Quantity; hint?: string }> = {
-    maxSurfaceC: { label: 'Highest surface temperature allowed', quantity: 'temperature', hint: 'Often 55–60 °C for metal jackets within reach; your plant’s specification governs.' },
-    maxHeatLossWPerM: { label: 'Most heat loss allowed per length', quantity: 'heatLossPerLength' },
-    maxHeatFluxWPerM2: { label: 'Most heat loss allowed per area', quantity: 'heatFlux' },
-    maxHeatLossW: { label: 'Most heat loss allowed, whole vessel', quantity: 'heatFlow' },
-    condensationMarginK: { label: 'Margin above the dew point', quantity: 'temperatureDelta' },
-    maxChangeK: { label: 'Largest temperature drop along the run', quantity: 'temperatureDelta' },
-    minHours: { label: 'Hours the standing water must stay above 0 °C', quantity: 'hours' },
-  };
-  const s = spec[key as string];
-  return (
-    <NumberField
-      label={s.label}
-      quantity={s.quantity}
-      system={system}
-      value={d[key] as Num}
-      onChange={(v) => onChange({ [key]: v } as Partial<Draft>)}
-      error={errors[key as string]}
-      hint={s.hint}
-      testID="qs-input-limit"
-    />
-  );
-}
-
-export function currencySymbol(code: string): string {
+function currencySymbol(code: string): string {
   return code === 'EUR' ? '€' : code === 'GBP' ? '£' : code === 'USD' ? '$' : `${code} `;
 }
 

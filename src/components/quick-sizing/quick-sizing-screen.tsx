@@ -1,13 +1,15 @@
-import { useCallback, useEffect, useRef, useState, useSyncExternalStore } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View, useWindowDimensions } from 'react-native';
 
 import { useSession } from '../../api/session';
 import { decodeCaseQuery, encodeCaseQuery } from '../../calc/case-url';
 import { typicalConditions } from '../../calc/examples';
+import { present } from '../../calc/present';
 import { defaultDraft, draftFromCase, draftOptions, type Draft } from '../../calc/quick-case';
 import type { UnitSystem } from '../../calc/units';
 import { useLiveCalc } from '../../calc/use-live-calc';
 import { breakpoints, spacing } from '../../theme';
+import { useHydrated } from '../common/use-hydrated';
 import { Banner, Button, Screen, Text, TextLink } from '../ui';
 
 import { ChartsPanel } from './charts-panel';
@@ -19,9 +21,10 @@ import { SummaryBar } from './summary-bar';
 
 const SUMMARY_BAR_SPACE = 88;
 
-const noSubscription = () => () => undefined;
-const clientSnapshot = () => true;
-const serverSnapshot = () => false;
+const UNIT_OPTIONS = [
+  { value: 'SI', label: 'SI' },
+  { value: 'US', label: 'US customary' },
+] as const;
 
 /**
  * Quick sizing: one pipe, vessel or wall, sized or checked without a site. Everything runs in the
@@ -31,7 +34,7 @@ export function QuickSizingScreen() {
   const { width } = useWindowDimensions();
   // The static page is rendered for a phone without a URL; the client's own view (wide layout, the
   // link's case) takes over right after hydration, so server and client markup agree.
-  const hydrated = useSyncExternalStore(noSubscription, clientSnapshot, serverSnapshot);
+  const hydrated = useHydrated();
   const large = hydrated && width >= breakpoints.large;
   const session = useSession();
   const signedIn = Boolean(session.data?.user);
@@ -53,6 +56,8 @@ export function QuickSizingScreen() {
   }
 
   const { output, pending, forDraft } = useLiveCalc(draft, system);
+  // Worked out once per change, for both the results panel and the pinned summary.
+  const presentation = useMemo(() => (output.kind === 'ok' ? present(draft, output, system) : null), [draft, output, system]);
 
   // Keep the link in step with the case (replace, not push: typing should not fill the history).
   useEffect(() => {
@@ -94,7 +99,7 @@ export function QuickSizingScreen() {
   );
   const results = (
     <View style={styles.stack}>
-      <ResultsPanel draft={draft} output={output} system={system} pending={pending} signedIn={signedIn} />
+      <ResultsPanel output={output} presentation={presentation} pending={pending} signedIn={signedIn} />
       {output.kind === 'ok' ? <ChartsPanel draft={draft} output={output} system={system} wide={large} /> : null}
       <MethodPanel result={output.kind === 'ok' ? output.result : null} />
     </View>
@@ -113,10 +118,7 @@ export function QuickSizingScreen() {
             label="Units"
             value={system}
             testID="qs-units"
-            options={[
-              { value: 'SI', label: 'SI' },
-              { value: 'US', label: 'US customary' },
-            ]}
+            options={UNIT_OPTIONS}
             onChange={setOverride}
           />
           <View style={styles.links}>
@@ -141,7 +143,7 @@ export function QuickSizingScreen() {
           </View>
         )}
       </Screen>
-      {!large ? <SummaryBar draft={draft} output={output} system={system} /> : null}
+      {!large ? <SummaryBar output={output} presentation={presentation} /> : null}
     </View>
   );
 }

@@ -44,20 +44,18 @@ export function ResultValue({ label, value, si, note, size = 'large', testID }: 
 
 export type VerdictState = 'pass' | 'caution' | 'fail';
 
-const verdictLook: Record<VerdictState, { icon: 'pass' | 'caution' | 'fail'; bg: string; word: string }> = {
-  pass: { icon: 'pass', bg: colors.passSoft, word: 'Pass' },
-  caution: { icon: 'caution', bg: colors.cautionSoft, word: 'Caution' },
-  fail: { icon: 'fail', bg: colors.failSoft, word: 'Fail' },
-};
+/** The word that goes with every verdict, so it never rests on colour alone. */
+export const VERDICT_WORD: Record<VerdictState, string> = { pass: 'Pass', caution: 'Caution', fail: 'Fail' };
+
+const verdictBackground: Record<VerdictState, string> = { pass: colors.passSoft, caution: colors.cautionSoft, fail: colors.failSoft };
 
 /** Pass / caution / fail with an icon and a word as well as colour. */
 export function VerdictBadge({ state, text, testID }: { state: VerdictState; text: string; testID?: string }) {
-  const l = verdictLook[state];
   return (
-    <View style={[styles.badge, { backgroundColor: l.bg, borderColor: colors[state] }]} testID={testID} {...({ dataSet: { state } } as object)}>
-      <Icon name={l.icon} tone={state} size={20} />
+    <View style={[styles.badge, { backgroundColor: verdictBackground[state], borderColor: colors[state] }]} testID={testID} {...({ dataSet: { state } } as object)}>
+      <Icon name={state} tone={state} size={20} />
       <Text weight="semibold" tone={state}>
-        {`${l.word}: `}
+        {`${VERDICT_WORD[state]}: `}
       </Text>
       <Text style={styles.badgeText}>{text}</Text>
     </View>

@@ -1,24 +1,22 @@
 import { StyleSheet, View } from 'react-native';
 
 import type { LiveOutput } from '../../calc/live';
-import { present } from '../../calc/present';
-import type { Draft } from '../../calc/quick-case';
-import type { UnitSystem } from '../../calc/units';
+import type { Presentation } from '../../calc/present';
 import { spacing } from '../../theme';
 import { Banner, Button, Card, Text } from '../ui';
 
 import { ResultValue, VerdictBadge } from './result-value';
 
 export interface ResultsPanelProps {
-  draft: Draft;
   output: LiveOutput;
-  system: UnitSystem;
+  /** The output in display units and words; null unless the output is a result. */
+  presentation: Presentation | null;
   pending: boolean;
   signedIn: boolean;
 }
 
 /** The numbers: verdict, headline results large with units, then the details and the year's energy. */
-export function ResultsPanel({ draft, output, system, pending, signedIn }: ResultsPanelProps) {
+export function ResultsPanel({ output, presentation: p, pending, signedIn }: ResultsPanelProps) {
   if (output.kind === 'invalid') {
     const entries = Object.entries(output.errors);
     return (
@@ -47,7 +45,7 @@ export function ResultsPanel({ draft, output, system, pending, signedIn }: Resul
       </Banner>
     );
   }
-  const p = present(draft, output, system);
+  if (!p) return null;
   return (
     <View style={styles.col} testID="qs-results" {...({ dataSet: { pending: pending ? 'true' : 'false' } } as object)}>
       <Card title="Results" subtitle={pending ? 'Updating…' : 'Live: they follow every change.'}>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 
 import { colors, radius, spacing } from '../../theme';
-import { Text, focusRing } from '../ui';
+import { Text, fieldBox, focusRing } from '../ui';
 
 export type SelectOption = { value: string; label: string; detail?: string };
 
@@ -72,17 +72,7 @@ export function SelectField({ label, value, options, onChange, testID }: SelectF
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
-  box: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: spacing.sm,
-    minHeight: 44,
-    paddingHorizontal: spacing.md,
-    borderWidth: 1,
-    borderColor: colors.borderStrong,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-  },
+  box: { ...fieldBox, gap: spacing.sm, paddingHorizontal: spacing.md },
   value: { flex: 1 },
   list: { maxHeight: 260, borderWidth: 1, borderColor: colors.border, borderRadius: radius.md, backgroundColor: colors.surface },
   option: { paddingHorizontal: spacing.md, paddingVertical: spacing.sm, minHeight: 44, justifyContent: 'center' },

@@ -1,18 +1,17 @@
 import { StyleSheet, View } from 'react-native';
 
 import type { LiveOutput } from '../../calc/live';
-import { present } from '../../calc/present';
-import type { Draft } from '../../calc/quick-case';
-import type { UnitSystem } from '../../calc/units';
+import type { Presentation } from '../../calc/present';
 import { colors, spacing } from '../../theme';
 import { Icon, Text } from '../ui';
 
+import { VERDICT_WORD, type VerdictState } from './result-value';
+
 /** Pinned to the bottom on phones, where the thumb is: the answer while the inputs scroll above. */
-export function SummaryBar({ draft, output, system }: { draft: Draft; output: LiveOutput; system: UnitSystem }) {
+export function SummaryBar({ output, presentation: p }: { output: LiveOutput; presentation: Presentation | null }) {
   let body: React.ReactNode;
-  let state: 'pass' | 'caution' | 'fail' = 'caution';
-  if (output.kind === 'ok') {
-    const p = present(draft, output, system);
+  let state: VerdictState;
+  if (p) {
     state = p.verdict.state;
     // The purpose's own answer (end of run, hours to 0 °C) goes before heat loss when there is one.
     const items = p.headline.length > 3 ? [p.headline[0], p.headline[1], p.headline[p.headline.length - 1]] : p.headline.slice(0, 3);
@@ -34,17 +33,16 @@ export function SummaryBar({ draft, output, system }: { draft: Draft; output: Li
     state = 'fail';
     body = (
       <Text weight="semibold" tone="fail">
-        {output.kind === 'invalid' ? 'Fix the marked inputs to see results.' : output.code === 'TARGET_NOT_REACHABLE' ? 'No thickness reaches this target.' : 'This case cannot be calculated.'}
+        {output.kind === 'invalid' ? 'Fix the marked inputs to see results.' : output.kind === 'error' && output.code === 'TARGET_NOT_REACHABLE' ? 'No thickness reaches this target.' : 'This case cannot be calculated.'}
       </Text>
     );
   }
-  const word = state === 'pass' ? 'Pass' : state === 'fail' ? 'Fail' : 'Caution';
   return (
     <View style={styles.bar} testID="qs-summary" role="status" aria-live="polite" {...({ dataSet: { state } } as object)}>
       <View style={styles.verdict}>
         <Icon name={state} tone={state} size={22} />
         <Text variant="caption" weight="semibold" tone={state}>
-          {word}
+          {VERDICT_WORD[state]}
         </Text>
       </View>
       {body}

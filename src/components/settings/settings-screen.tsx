@@ -30,7 +30,7 @@ export function SettingsScreen({ bottomInset = 0 }: { bottomInset?: number }) {
     const result = await update.mutateAsync({ unitSystem });
     setMessage(
       result.kind === 'ok'
-        ? { tone: 'pass', text: `Units saved: ${unitSystem === 'SI' ? 'SI' : 'US customary'}. Results and inputs use them from now on.` }
+        ? { tone: 'pass', text: `Units saved: ${unitChoices.find((c) => c.value === unitSystem)?.label ?? unitSystem}. Results and inputs use them from now on.` }
         : { tone: 'fail', text: problemMessage(result) },
     );
   };

@@ -4,8 +4,8 @@ import { StyleSheet, View } from 'react-native';
 import { siteCreateSchema } from '../../../shared/schemas';
 import { useCreateSite } from '../../api/sites';
 import { spacing } from '../../theme';
-import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
-import { Banner, Button, Card } from '../ui';
+import { applyProblem, FormErrorBanner, FormTextField, trimStrings, validateWithSchema } from '../forms';
+import { Button, Card } from '../ui';
 
 type Values = { name: string; description: string };
 
@@ -33,7 +33,7 @@ export function CreateSiteForm({ onDone }: { onDone: () => void }) {
       >
         {(form) => (
           <View style={styles.form}>
-            {(form.status as FormStatus)?.error ? <Banner tone="fail">{(form.status as FormStatus)!.error}</Banner> : null}
+            <FormErrorBanner status={form.status} />
             <FormTextField form={form} name="name" label="Site name" testID="site-name" />
             <FormTextField form={form} name="description" label="Description (optional)" multiline numberOfLines={3} />
             <View style={styles.actions}>

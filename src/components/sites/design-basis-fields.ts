@@ -1,8 +1,7 @@
-import { ValidationError } from 'yup';
-
 import { sitePatchSchema, type SitePatchInput } from '../../../shared/schemas/sites';
 import type { DesignBases, SiteDetail } from '../../api/types';
 import { formatInputNumber, fromDisplay, parseNumber, toDisplay, unitOf, type Quantity, type UnitSystem } from '../../calc/units';
+import { validateWithSchema } from '../forms/validate';
 
 export type BasisKey = 'touch' | 'energy' | 'condensation';
 
@@ -22,6 +21,10 @@ export interface BasisSpec {
   fields: readonly BasisField[];
 }
 
+/** Every basis starts from the air temperature; it is what makes a basis present at all. */
+const AIR_TEMPERATURE: BasisField = { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true };
+const WIND_SPEED: BasisField = { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' };
+
 /** The three design bases of a site, in the order a practitioner reads them. */
 export const BASES: readonly BasisSpec[] = [
   {
@@ -29,9 +32,9 @@ export const BASES: readonly BasisSpec[] = [
     title: 'Touch safety',
     purpose: 'Hottest credible air, still air and the worst emissivity: personnel protection is sized against these.',
     fields: [
-      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
+      AIR_TEMPERATURE,
       { key: 'radiantTemperatureC', label: 'Radiant temperature', quantity: 'temperature' },
-      { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' },
+      WIND_SPEED,
       { key: 'surfaceEmissivity', label: 'Surface emissivity', quantity: 'ratio' },
       { key: 'contactSeconds', label: 'Contact time', quantity: 'seconds' },
     ],
@@ -41,8 +44,8 @@ export const BASES: readonly BasisSpec[] = [
     title: 'Energy',
     purpose: 'Annual-average air and wind with the economics that heat conservation and the totals use.',
     fields: [
-      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
-      { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' },
+      AIR_TEMPERATURE,
+      WIND_SPEED,
       { key: 'operatingHoursPerYear', label: 'Operating hours a year', quantity: 'hours' },
       { key: 'energyPricePerKWh', label: 'Energy price', quantity: 'pricePerEnergy' },
       { key: 'currency', label: 'Currency' },
@@ -56,7 +59,7 @@ export const BASES: readonly BasisSpec[] = [
     title: 'Condensation',
     purpose: 'Air and humidity around cold lines; their surfaces must stay above the dew point by the margin.',
     fields: [
-      { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true },
+      AIR_TEMPERATURE,
       { key: 'relativeHumidityPct', label: 'Relative humidity', quantity: 'percent', required: true },
       { key: 'marginK', label: 'Margin above dew point', quantity: 'temperatureDelta' },
     ],
@@ -124,7 +127,7 @@ export function formToPatch(
   for (const b of BASES) {
     if (scope === 'touch' && b.key !== 'touch') continue;
     const out: Record<string, unknown> = {};
-    const touched = b.fields.some((f) => values[fieldName(b.key, f.key)].trim() !== '');
+    const touched = b.fields.some((f) => (values[fieldName(b.key, f.key)] ?? '').trim() !== '');
     if (!touched && basisValue(stored, b.key, 'airTemperatureC') === undefined) continue;
     for (const f of b.fields) {
       const name = fieldName(b.key, f.key);
@@ -153,14 +156,9 @@ export function formToPatch(
     patch.name = values.name.trim();
     patch.description = values.description.trim();
   }
-  try {
-    sitePatchSchema.validateSync(patch, { abortEarly: false });
-  } catch (e) {
-    if (!(e instanceof ValidationError)) throw e;
-    for (const item of e.inner.length > 0 ? e.inner : [e]) {
-      const name = formFieldOf(item.path ?? '');
-      if (name && !(name in errors)) errors[name] = item.message;
-    }
+  for (const [path, message] of Object.entries(validateWithSchema(sitePatchSchema, patch))) {
+    const name = formFieldOf(path);
+    if (message !== undefined && !(name in errors)) errors[name] = message;
   }
   return Object.keys(errors).length > 0 ? { patch: null, errors } : { patch: patch as SitePatchInput, errors };
 }

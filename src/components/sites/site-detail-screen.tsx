@@ -87,7 +87,9 @@ export function SiteDetailScreen({ id }: { id: string }) {
   const role = session.data?.role;
   const system: UnitSystem = session.data?.settings?.unitSystem ?? 'SI';
   const scope: EditScope | null = can(role, 'site.edit') ? 'all' : can(role, 'site.editTouchBasis') ? 'touch' : null;
-  const edit = scope ? () => setEditing(true) : undefined;
+  const startEditing = () => setEditing(true);
+  /** A safety officer may set the touch-safety basis only. */
+  const mayEditBasis = (key: BasisSpec['key']) => scope === 'all' || (scope === 'touch' && key === 'touch');
 
   if (site.isPending) {
     return (
@@ -128,7 +130,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
           {scope || can(role, 'site.delete') ? (
             <View style={styles.actions}>
               {scope ? (
-                <Button label={scope === 'all' ? 'Edit site' : 'Edit touch-safety basis'} onPress={() => setEditing(true)} testID="site-edit" />
+                <Button label={scope === 'all' ? 'Edit site' : 'Edit touch-safety basis'} onPress={startEditing} testID="site-edit" />
               ) : null}
               {can(role, 'site.delete') ? <DeleteSite site={s} /> : null}
             </View>
@@ -139,7 +141,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
                 title="No description yet"
                 message="Say what this site covers — the plant area, its services and where its line list comes from — so the team knows what belongs here."
                 actionLabel="Add a description"
-                onAction={() => setEditing(true)}
+                onAction={startEditing}
                 testID="site-no-description"
               />
             ) : null
@@ -147,7 +149,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
           <View style={styles.bases}>
             {BASES.map((b) => (
               <View key={b.key} style={styles.basis}>
-                <BasisCard spec={b} site={s} system={system} onEdit={scope === 'all' || (scope === 'touch' && b.key === 'touch') ? edit : undefined} />
+                <BasisCard spec={b} site={s} system={system} onEdit={mayEditBasis(b.key) ? startEditing : undefined} />
               </View>
             ))}
           </View>

@@ -7,7 +7,7 @@ import { useUpdateSite } from '../../api/sites';
 import type { SiteDetail } from '../../api/types';
 import { unitOf, type UnitSystem } from '../../calc/units';
 import { spacing } from '../../theme';
-import { applyProblem, FormTextField, type FormStatus } from '../forms';
+import { applyProblem, FormErrorBanner, FormTextField } from '../forms';
 import { Banner, Button, Card, Text } from '../ui';
 
 import { BASES, fieldName, formFieldOf, formToPatch, siteToForm, type EditScope, type SiteFormValues } from './design-basis-fields';
@@ -53,58 +53,51 @@ export function SiteEditForm({ site, system, scope, onDone }: SiteEditFormProps)
         applyProblem(onFormFields(result), helpers, fieldNames);
       }}
     >
-      {(form) => {
-        const status = form.status as FormStatus;
-        return (
-          <View style={styles.form} testID="site-edit-form">
-            {status?.error ? (
-              <Banner tone="fail" title="Not saved">
-                {status.error}
-              </Banner>
-            ) : null}
-            {form.submitCount > 0 && !form.isValid ? (
-              <Banner tone="fail" title="Not saved">
-                Some fields need attention; each is marked below.
-              </Banner>
-            ) : null}
-            {scope === 'all' ? (
-              <Card title="Site">
-                <FormTextField form={form} name="name" label="Site name" testID="site-edit-name" />
-                <FormTextField form={form} name="description" label="Description (optional)" multiline numberOfLines={3} testID="site-edit-description" />
-              </Card>
-            ) : (
-              <Text tone="textMuted">Your role may change the touch-safety basis only; an owner or engineer edits the rest.</Text>
-            )}
-            {bases.map((b) => (
-              <Card key={b.key} title={`${b.title} basis`} subtitle={b.purpose}>
-                <View style={styles.fields}>
-                  {b.fields.map((f) => {
-                    const unit = f.quantity ? unitOf(f.quantity, system) : null;
-                    return (
-                      <View key={f.key} style={styles.field}>
-                        <FormTextField
-                          form={form}
-                          name={fieldName(b.key, f.key)}
-                          label={f.label}
-                          hint={f.required ? undefined : 'Optional'}
-                          unit={unit?.suffix || undefined}
-                          unitSpoken={unit?.spoken || undefined}
-                          inputMode={f.quantity ? 'decimal' : 'text'}
-                          testID={`basis-${b.key}-${f.key}`}
-                        />
-                      </View>
-                    );
-                  })}
-                </View>
-              </Card>
-            ))}
-            <View style={styles.actions}>
-              <Button label="Save changes" busy={form.isSubmitting} onPress={() => form.handleSubmit()} testID="site-save" />
-              <Button label="Cancel" variant="secondary" onPress={onDone} testID="site-cancel" />
-            </View>
+      {(form) => (
+        <View style={styles.form} testID="site-edit-form">
+          <FormErrorBanner status={form.status} title="Not saved" />
+          {form.submitCount > 0 && !form.isValid ? (
+            <Banner tone="fail" title="Not saved">
+              Some fields need attention; each is marked below.
+            </Banner>
+          ) : null}
+          {scope === 'all' ? (
+            <Card title="Site">
+              <FormTextField form={form} name="name" label="Site name" testID="site-edit-name" />
+              <FormTextField form={form} name="description" label="Description (optional)" multiline numberOfLines={3} testID="site-edit-description" />
+            </Card>
+          ) : (
+            <Text tone="textMuted">Your role may change the touch-safety basis only; an owner or engineer edits the rest.</Text>
+          )}
+          {bases.map((b) => (
+            <Card key={b.key} title={`${b.title} basis`} subtitle={b.purpose}>
+              <View style={styles.fields}>
+                {b.fields.map((f) => {
+                  const unit = f.quantity ? unitOf(f.quantity, system) : null;
+                  return (
+                    <View key={f.key} style={styles.field}>
+                      <FormTextField
+                        form={form}
+                        name={fieldName(b.key, f.key)}
+                        label={f.label}
+                        hint={f.required ? undefined : 'Optional'}
+                        unit={unit?.suffix || undefined}
+                        unitSpoken={unit?.spoken || undefined}
+                        inputMode={f.quantity ? 'decimal' : 'text'}
+                        testID={`basis-${b.key}-${f.key}`}
+                      />
+                    </View>
+                  );
+                })}
+              </View>
+            </Card>
+          ))}
+          <View style={styles.actions}>
+            <Button label="Save changes" busy={form.isSubmitting} onPress={() => form.handleSubmit()} testID="site-save" />
+            <Button label="Cancel" variant="secondary" onPress={onDone} testID="site-cancel" />
           </View>
-        );
-      }}
+        </View>
+      )}
     </Formik>
   );
 }

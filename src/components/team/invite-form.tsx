@@ -5,7 +5,7 @@ import { invitationCreateSchema } from '../../../shared/schemas';
 import { useInviteMember } from '../../api/team';
 import { ROLES, roleDescriptions, roleLabels, type Role } from '../../api/types';
 import { spacing } from '../../theme';
-import { applyProblem, FormTextField, trimStrings, validateWithSchema, type FormStatus } from '../forms';
+import { applyProblem, FormErrorBanner, type FormStatus, FormTextField, trimStrings, validateWithSchema } from '../forms';
 import { Banner, Button, Card, ChoiceGroup } from '../ui';
 
 type Values = { email: string; role: Role | '' };
@@ -39,7 +39,7 @@ export function InviteForm() {
                   {status.done}
                 </Banner>
               ) : null}
-              {status?.error ? <Banner tone="fail" title="Could not invite">{status.error}</Banner> : null}
+              <FormErrorBanner status={status} title="Could not invite" />
               <FormTextField form={form} name="email" label="E-mail address" inputMode="email" autoCapitalize="none" autoComplete="off" testID="invite-email" />
               <ChoiceGroup
                 label="Role"

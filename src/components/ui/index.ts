@@ -1,4 +1,5 @@
 export * from './banner';
+export * from './brand-mark';
 export * from './button';
 export * from './card';
 export * from './choice-group';

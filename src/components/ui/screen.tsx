@@ -32,17 +32,22 @@ export function Screen({ title, intro, width = 'wide', children, bottomInset = 0
       testID={testID}
     >
       <View role="main" style={[styles.content, { maxWidth: maxWidths[width] }, contentStyle]}>
-        {title ? (
-          <View style={styles.head}>
-            <Text variant="heading" role="heading" aria-level={1}>
-              {title}
-            </Text>
-            {intro ? <Text tone="textMuted">{intro}</Text> : null}
-          </View>
-        ) : null}
+        {title ? <PageTitle title={title} intro={intro} /> : null}
         {children}
       </View>
     </ScrollView>
+  );
+}
+
+/** The page's one level-1 heading, with an optional sentence under it. */
+export function PageTitle({ title, intro }: { title: string; intro?: string }) {
+  return (
+    <View style={styles.head}>
+      <Text variant="heading" role="heading" aria-level={1}>
+        {title}
+      </Text>
+      {intro ? <Text tone="textMuted">{intro}</Text> : null}
+    </View>
   );
 }
 

@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import { Pressable, StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { Pressable, StyleSheet, TextInput, View, type TextInputProps, type ViewStyle } from 'react-native';
 
 import { colors, fonts, fontSizes, radius, spacing, tabularFigures } from '../../theme';
 
@@ -111,17 +111,20 @@ export function TextField({
   );
 }
 
+/** The bordered box of a form field, shared by text inputs and choices that open in place. */
+export const fieldBox: ViewStyle = {
+  flexDirection: 'row',
+  alignItems: 'center',
+  minHeight: 44,
+  borderWidth: 1,
+  borderColor: colors.borderStrong,
+  borderRadius: radius.md,
+  backgroundColor: colors.surface,
+};
+
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
-  box: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.borderStrong,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-  },
+  box: fieldBox,
   boxFocused: { borderColor: colors.focus, ...focusRing, outlineOffset: 0 } as never,
   boxError: { borderColor: colors.fail, borderWidth: 2 },
   input: {
