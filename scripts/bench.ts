@@ -57,24 +57,11 @@ function cliWall(kind: 'analyse' | 'solve', count: number, seed: number) {
   return { cases: count, wallSeconds: Number(wallS.toFixed(3)), exitCode: r.status, itemsOut: items };
 }
 
-function firstPaint(): { firstPaintMs: number | null; firstContentfulPaintMs: number | null; note?: string } {
-  const script = path.join(root, 'scripts', 'bench-quick-sizing.ts');
-  if (!existsSync(path.join(root, 'dist')) || !existsSync('/usr/bin/chromium') || !existsSync(script)) {
-    return { firstPaintMs: null, firstContentfulPaintMs: null, note: 'skipped: needs dist/ (npm run build:web) and /usr/bin/chromium' };
-  }
-  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [script, '--json'], { cwd: root, env: process.env, timeout: 120_000 });
-  try {
-    const lines = r.stdout.toString().trim().split('\n');
-    return JSON.parse(lines[lines.length - 1]);
-  } catch {
-    return { firstPaintMs: null, firstContentfulPaintMs: null, note: `failed: ${r.stderr.toString().slice(0, 300)}` };
-  }
-}
-
-function apiUnderLoad(): Record<string, unknown> | null {
-  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [path.join(root, 'scripts', 'bench-api.ts')], {
+/** Runs a companion benchmark script and reads the one JSON object on its last output line. */
+function runJsonScript(script: string, args: string[], env: NodeJS.ProcessEnv): Record<string, unknown> {
+  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [path.join(root, 'scripts', script), ...args], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'test' },
+    env,
     timeout: 120_000,
   });
   try {
@@ -83,6 +70,17 @@ function apiUnderLoad(): Record<string, unknown> | null {
   } catch {
     return { note: `failed: ${r.stderr.toString().slice(0, 300)}` };
   }
+}
+
+function firstPaint(): Record<string, unknown> {
+  if (!existsSync(path.join(root, 'dist')) || !existsSync('/usr/bin/chromium')) {
+    return { firstPaintMs: null, firstContentfulPaintMs: null, note: 'skipped: needs dist/ (npm run build:web) and /usr/bin/chromium' };
+  }
+  return runJsonScript('bench-quick-sizing.ts', ['--json'], process.env);
+}
+
+function apiUnderLoad(): Record<string, unknown> {
+  return runJsonScript('bench-api.ts', [], { ...process.env, NODE_ENV: 'test' });
 }
 
 const figures = {

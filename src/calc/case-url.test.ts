@@ -1,17 +1,11 @@
 import type { CalcCase } from '../../shared/calc/types';
 
+import { CONTRACT_EXAMPLE_CASE } from '../../tests/helpers/contract-case';
+
 import { caseToParam, decodeCaseParams, decodeCaseQuery, encodeCaseQuery } from './case-url';
 import { defaultDraft, draftFromCase, draftOptions, draftToCase } from './quick-case';
 
-const example: CalcCase = {
-  geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
-  processTemperatureC: 250,
-  layers: [{ thicknessM: 0.05, conductivity: [0.035, 0.00015], maxServiceTemperatureC: 650 }],
-  surfaceEmissivity: 0.1,
-  ambient: { airTemperatureC: 30, radiantTemperatureC: 30, windSpeedMS: 0, relativeHumidityPct: 60 },
-  solveFor: { criterion: 'surfaceTemperature', maxC: 60 },
-  round: { seriesM: [0.025, 0.03, 0.04, 0.05, 0.06, 0.08, 0.1], maxSingleLayerM: 0.1 },
-};
+const example: CalcCase = CONTRACT_EXAMPLE_CASE;
 
 describe('shared links', () => {
   it('when a case is encoded and decoded, then the same SI case comes back', () => {
