@@ -243,6 +243,35 @@ describe('errors and warnings', () => {
     expect(r.warnings.map((w) => w.code)).toContain('MAX_SERVICE_TEMPERATURE_EXCEEDED');
   });
 
+  it('when a layer runs below its minimum service temperature, then a warning names the layer and the limit', () => {
+    const layer = { thicknessM: 0.05, conductivity: [0.04], minServiceTemperatureC: -18 };
+    const cold = analyse(pipe({ processTemperatureC: -40, layers: [layer] }));
+    const w = cold.warnings.find((x) => x.code === 'MIN_SERVICE_TEMPERATURE_EXCEEDED');
+    expect(w?.message).toMatch(/Layer 1 reaches -40\.0 °C, below its minimum service temperature of -18 °C/);
+    const fine = analyse(pipe({ processTemperatureC: 5, layers: [layer] }));
+    expect(fine.warnings.map((x) => x.code)).not.toContain('MIN_SERVICE_TEMPERATURE_EXCEEDED');
+  });
+
+  it('when a layer’s mean temperature leaves the range its k(T) was fitted over, then a warning says it is extrapolated', () => {
+    const layer = { thicknessM: 0.05, conductivity: [0.035, 0.00015], conductivityDataRangeC: [-73, 24] as [number, number] };
+    // 250 °C inside, about 40 °C outside: the mean is far above 24 °C.
+    const hot = analyse(pipe({ layers: [layer] }));
+    expect(hot.warnings.find((x) => x.code === 'CONDUCTIVITY_EXTRAPOLATED')?.message).toMatch(/Layer 1 .* outside -73\.0…24\.0 °C/);
+    // 10 °C inside, 30 °C air: the mean stays within the range.
+    const mild = analyse(pipe({ processTemperatureC: 10, layers: [layer] }));
+    expect(mild.warnings.map((x) => x.code)).not.toContain('CONDUCTIVITY_EXTRAPOLATED');
+  });
+
+  it('when the service limits or data range are contradictory or malformed, then the error names the field', () => {
+    const bad = (extra: object) => runCase({ ...pipe(), layers: [{ thicknessM: 0.05, conductivity: [0.04], ...extra }] });
+    const a = bad({ minServiceTemperatureC: 300, maxServiceTemperatureC: 200 });
+    expect('error' in a && a.error.field).toBe('layers[0].minServiceTemperatureC');
+    const b = bad({ conductivityDataRangeC: [50, 10] });
+    expect('error' in b && b.error.field).toBe('layers[0].conductivityDataRangeC');
+    const c = bad({ conductivityDataRangeC: [10] });
+    expect('error' in c && c.error.field).toBe('layers[0].conductivityDataRangeC');
+  });
+
   it('when a cold outdoor surface is below the dew point, then dew and sky warnings appear', () => {
     const r = analyse(
       pipe({

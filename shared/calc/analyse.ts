@@ -600,19 +600,42 @@ export function analyse(input: CalcCase): CalcResult {
   const gov = ev.models[ev.governing];
   const partFaces = ev.models.map(interfaceTemperatures);
   const faces = partFaces[ev.governing];
-  // Service temperature: the hottest face of each layer over all parts.
+  // Service temperatures: the hottest and coldest face of each layer over all parts; the data range of k(T)
+  // against the layer's mean temperature, as material tables give k at mean temperature.
   for (let li = 0; li < thick.length; li++) {
     const layer = c.layers[layerIndex[li]];
-    if (layer.maxServiceTemperatureC === undefined) continue;
+    const n = layerIndex[li] + 1;
     let hot = -Infinity;
+    let cold = Infinity;
+    let meanLo = Infinity;
+    let meanHi = -Infinity;
     for (const f of partFaces) {
       const inner = li === 0 ? f.innerC : f.outerFacesC[li - 1];
-      hot = Math.max(hot, inner, f.outerFacesC[li]);
+      const outer = f.outerFacesC[li];
+      hot = Math.max(hot, inner, outer);
+      cold = Math.min(cold, inner, outer);
+      meanLo = Math.min(meanLo, (inner + outer) / 2);
+      meanHi = Math.max(meanHi, (inner + outer) / 2);
     }
-    if (hot > layer.maxServiceTemperatureC) {
+    if (layer.maxServiceTemperatureC !== undefined && hot > layer.maxServiceTemperatureC) {
       warnings.push({
         code: 'MAX_SERVICE_TEMPERATURE_EXCEEDED',
-        message: `Layer ${layerIndex[li] + 1} reaches ${hot.toFixed(1)} °C, above its maximum service temperature of ${layer.maxServiceTemperatureC} °C.`,
+        message: `Layer ${n} reaches ${hot.toFixed(1)} °C, above its maximum service temperature of ${layer.maxServiceTemperatureC} °C.`,
+      });
+    }
+    if (layer.minServiceTemperatureC !== undefined && cold < layer.minServiceTemperatureC) {
+      warnings.push({
+        code: 'MIN_SERVICE_TEMPERATURE_EXCEEDED',
+        message: `Layer ${n} reaches ${cold.toFixed(1)} °C, below its minimum service temperature of ${layer.minServiceTemperatureC} °C.`,
+      });
+    }
+    const range = layer.conductivityDataRangeC;
+    const slack = 0.5; // K: tables state whole degrees
+    if (range && (meanLo < range[0] - slack || meanHi > range[1] + slack)) {
+      const mean = meanLo < range[0] - slack ? meanLo : meanHi;
+      warnings.push({
+        code: 'CONDUCTIVITY_EXTRAPOLATED',
+        message: `Layer ${n} has a mean temperature of ${mean.toFixed(1)} °C, outside ${range[0].toFixed(1)}…${range[1].toFixed(1)} °C where its conductivity rests on data; k(T) is extrapolated there, so check the result against the product's data.`,
       });
     }
   }

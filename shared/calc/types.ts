@@ -42,6 +42,13 @@ export type Layer = {
   conductivity: number[];
   /** Maximum service temperature [°C]; a warning when exceeded. */
   maxServiceTemperatureC?: number;
+  /** Minimum service temperature [°C]; a warning when the layer gets colder. */
+  minServiceTemperatureC?: number;
+  /**
+   * Mean temperatures [°C] between which k(T) rests on measured or tabulated data, `[lowest, highest]`;
+   * a warning when the layer's mean temperature lies outside (the curve is then an extrapolation).
+   */
+  conductivityDataRangeC?: [number, number];
 };
 
 export type Ambient = {

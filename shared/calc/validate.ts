@@ -100,7 +100,7 @@ function layers(v: unknown, solving: boolean): Layer[] {
   }
   return v.map((raw, i) => {
     const P = `layers[${i}]`;
-    const o = object(raw, P, ['thicknessM', 'conductivity', 'maxServiceTemperatureC']);
+    const o = object(raw, P, ['thicknessM', 'conductivity', 'maxServiceTemperatureC', 'minServiceTemperatureC', 'conductivityDataRangeC']);
     const isSolved = solving && i === v.length - 1;
     // The solved layer's own thickness is ignored, so it may be left out.
     const thicknessM = num(o, 'thicknessM', P, { min: 0, max: MAX_LAYER_M }, !isSolved) ?? 0;
@@ -117,6 +117,24 @@ function layers(v: unknown, solving: boolean): Layer[] {
     const layer: Layer = { thicknessM, conductivity: k.slice() as number[] };
     const ms = num(o, 'maxServiceTemperatureC', P, { min: -273.15, max: 3000 }, false);
     if (ms !== undefined) layer.maxServiceTemperatureC = ms;
+    const mins = num(o, 'minServiceTemperatureC', P, { min: -273.15, max: 3000 }, false);
+    if (mins !== undefined) {
+      if (ms !== undefined && mins >= ms) {
+        throw new CalcInputError(`${P}.minServiceTemperatureC`, `${P}.minServiceTemperatureC must be below maxServiceTemperatureC.`, 'OUT_OF_RANGE');
+      }
+      layer.minServiceTemperatureC = mins;
+    }
+    const rf = `${P}.conductivityDataRangeC`;
+    const range = o.conductivityDataRangeC;
+    if (range !== undefined) {
+      const ok =
+        Array.isArray(range) &&
+        range.length === 2 &&
+        range.every((t) => typeof t === 'number' && Number.isFinite(t) && t >= -273.15 && t <= 3000) &&
+        (range[0] as number) <= (range[1] as number);
+      if (!ok) throw new CalcInputError(rf, `${rf} must be [lowest, highest] mean temperatures in °C, lowest first.`);
+      layer.conductivityDataRangeC = [range[0] as number, range[1] as number];
+    }
     return layer;
   });
 }

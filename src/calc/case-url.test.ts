@@ -3,6 +3,7 @@ import type { CalcCase } from '../../shared/calc/types';
 import { CONTRACT_EXAMPLE_CASE } from '../../tests/helpers/contract-case';
 
 import { caseToParam, decodeCaseParams, decodeCaseQuery, encodeCaseQuery } from './case-url';
+import { materialById } from './library';
 import { defaultDraft, draftFromCase, draftOptions, draftToCase } from './quick-case';
 
 const example: CalcCase = CONTRACT_EXAMPLE_CASE;
@@ -58,5 +59,39 @@ describe('shared links', () => {
         }
       }
     }
+  });
+});
+
+describe('library materials in a case', () => {
+  it('when a draft uses a library material as chosen, then the case carries its lower limit and table range, and a link brings the material back', () => {
+    const d = defaultDraft();
+    const c = draftToCase(d);
+    const layer = c.layers[0];
+    expect(layer.minServiceTemperatureC).toBe(-18);
+    expect(layer.conductivityDataRangeC?.[0]).toBeCloseTo(37.78, 2); // 100 °F, the table's first row
+    const back = decodeCaseQuery(`?${encodeCaseQuery(c, draftOptions(d))}`);
+    expect(back.kind).toBe('ok');
+    if (back.kind === 'ok') expect(draftFromCase(back.case, back.options).layers[0].materialId).toBe(d.layers[0].materialId);
+  });
+
+  it('when the curve of a library material is edited, then the case no longer claims the material’s table range', () => {
+    const d = defaultDraft();
+    d.layers[0] = { ...d.layers[0], conductivity: [0.05, 0.0001] };
+    const layer = draftToCase(d).layers[0];
+    expect(layer.conductivityDataRangeC).toBeUndefined();
+    expect(layer.minServiceTemperatureC).toBeUndefined();
+  });
+
+  it('when a link carries a malformed table range, then the message names the field', () => {
+    const bad = JSON.stringify({ ...example, layers: [{ ...example.layers[0], conductivityDataRangeC: [1, 2, 3] }] });
+    const r = decodeCaseParams(bad);
+    expect(r.kind === 'invalid' && r.message).toContain('conductivityDataRangeC');
+  });
+});
+
+describe('material provenance line', () => {
+  it('when a material is offered, then its line names the specification and says whether the table was checked', () => {
+    expect(materialById('cellular-glass-c552-grade-6')?.provenance).toMatch(/^k\(T\) from ASTM C552.*checked against a published chart/);
+    expect(materialById('mineral-fibre-pipe-c547-type-i')?.provenance).toMatch(/recalled, not checked/);
   });
 });

@@ -72,6 +72,8 @@ const caseSchema = yup.object({
         thicknessM: num(),
         conductivity: yup.array(num()).min(1).required(),
         maxServiceTemperatureC: optNum(),
+        minServiceTemperatureC: optNum(),
+        conductivityDataRangeC: yup.array(num()).length(2).default(undefined).optional(),
       }),
     )
     .required(),

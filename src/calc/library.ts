@@ -12,7 +12,12 @@ export type MaterialOption = {
   /** k(T) coefficients [W/(m·K)], T in °C. */
   conductivity: number[];
   maxServiceTemperatureC?: number;
+  minServiceTemperatureC?: number;
+  /** Mean temperatures [°C] between which k(T) rests on the material's table. */
+  conductivityDataRangeC?: [number, number];
   source?: string;
+  /** One line for the form: the specification and how well its table is known. */
+  provenance?: string;
 };
 
 export type FinishOption = { id: string; name: string; emissivity: number; source?: string };

@@ -230,6 +230,12 @@ function layersOf(d: Draft): Layer[] {
     while (conductivity.length > 1 && conductivity[conductivity.length - 1] === 0) conductivity.pop();
     const layer: Layer = { thicknessM: must(l.thicknessM, `layers[${i}].thicknessM`), conductivity };
     if (l.maxServiceTemperatureC !== null) layer.maxServiceTemperatureC = l.maxServiceTemperatureC;
+    // A library material as chosen (curve not edited) also carries its lower limit and the range of its table.
+    const m = materialById(l.materialId);
+    if (m && materialMatching(conductivity, layer.maxServiceTemperatureC)?.id === m.id) {
+      if (m.minServiceTemperatureC !== undefined) layer.minServiceTemperatureC = m.minServiceTemperatureC;
+      if (m.conductivityDataRangeC) layer.conductivityDataRangeC = [...m.conductivityDataRangeC];
+    }
     return layer;
   });
 }

@@ -3,9 +3,9 @@ import { analyse, heatFlowCylindricalLayer, type CalcCase } from '../../shared/c
 describe('critical radius of insulation', () => {
   it('when a 5 mm radius tube has k = 0.055 insulation and h = 5 W/m²K, then heat loss peaks at r_cr = k/h = 11 mm', () => {
     // Source: Incropera & DeWitt, 6th ed., Eq. 3.35, r_cr = k/h, derived by setting d(R′_cond + R′_conv)/dr = 0
-    // (the derivation is the reference; the inputs r_i = 5 mm, k = 0.055 W/(m·K), h = 5 W/(m²·K) are those of
-    // its Example 3.5, from memory). The test maximises q′ = ΔT/(R′_cond + R′_conv) with the package's
-    // cylindrical-layer law and a fixed h; a 0.1 mm scan step → 1 % tolerance.
+    // (the derivation is the reference; the inputs r_i = 5 mm, k = 0.055 W/(m·K), h = 5 W/(m²·K) are chosen
+    // here). The test maximises q′ = ΔT/(R′_cond + R′_conv) with the package's cylindrical-layer law and a
+    // fixed h; a 0.1 mm scan step → 1 % tolerance.
     const ri = 0.005;
     const k = 0.055;
     const h = 5;

@@ -5,17 +5,13 @@
  * 2008, App. B.8); a year of continuous operation is 8760 h. The cases are hand calculations from these
  * definitions, worked in the comments; money is checked to the cent, exactly, since the method states half-up
  * rounding once at the end.
- * Source: equivalent lengths of valves (1.0 m) and flange pairs (0.5 m) — common practice, from memory.
  */
 import {
   annualCo2,
   annualEnergyAssessment,
   annualHeatEnergy,
-  componentsEquivalentLengthM,
   energyCost,
-  EXAMPLE_NATURAL_GAS_EMISSION_FACTOR,
   fuelEnergyKWh,
-  lineHeatFlowW,
   savingVersusBare,
   type EnergyBasis,
 } from '../../shared/calc/energy';
@@ -86,7 +82,6 @@ describe('CO₂ and the whole assessment', () => {
     expect(co2.tonnes).toBeCloseTo(2, 12);
     expect(co2.basis).toBe('test factor');
     expect(() => annualCo2(1, { kgCo2PerKWh: 0.2, basis: '' })).toThrow(/basis/);
-    expect(EXAMPLE_NATURAL_GAS_EMISSION_FACTOR.basis).toMatch(/from memory/);
   });
 
   it('when 1 kW runs 8000 h at 80 % and 0.05 per kWh, then it costs 500.00 and emits 2000 kg', () => {
@@ -108,28 +103,5 @@ describe('CO₂ and the whole assessment', () => {
   it('when a thin layer increases the heat flow, then the saving is negative, not hidden', () => {
     // 10 W more × 8000 h = 80 kWh heat; / 0.8 = 100 kWh fuel; × 0.05 = 5.00 lost.
     expect(savingVersusBare(100, 110, basis).costSaved.text).toBe('-5.00');
-  });
-});
-
-describe('valves and flanges by equivalent length (common practice, from memory)', () => {
-  it('when a line has 2 valves and 4 flange pairs, then 4 m of pipe is added', () => {
-    expect(componentsEquivalentLengthM({ valves: 2, flangePairs: 4, fittings: 6 })).toBe(4);
-  });
-
-  it('when the valves are bare, then they are charged at the bare heat loss', () => {
-    // 100 m × 50 W/m + 2 valves × 1.0 m × 500 W/m = 5000 + 1000 = 6000 W.
-    const q = lineHeatFlowW({ heatLossWPerM: 50, bareHeatLossWPerM: 500, lengthM: 100, counts: { valves: 2 }, componentsInsulated: false });
-    expect(q.totalW).toBeCloseTo(6000, 9);
-    expect(q.method).toMatch(/common practice/);
-  });
-
-  it('when the valves are insulated, then they are charged at the insulated heat loss', () => {
-    const q = lineHeatFlowW({ heatLossWPerM: 50, lengthM: 100, counts: { valves: 2, flangePairs: 2 }, componentsInsulated: true });
-    expect(q.totalW).toBeCloseTo(5150, 9);
-  });
-
-  it('when bare components lack a bare heat loss or counts are not whole, then it throws with the field', () => {
-    expect(() => lineHeatFlowW({ heatLossWPerM: 50, lengthM: 1, counts: { valves: 1 }, componentsInsulated: false })).toThrow(/bareHeatLossWPerM/);
-    expect(() => componentsEquivalentLengthM({ valves: 1.5 })).toThrow(/valves/);
   });
 });

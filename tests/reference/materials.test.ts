@@ -8,14 +8,15 @@
  *   Insulation Association Insulation Materials Specification Chart (April 2024), which tabulates the ASTM maxima.
  * - ASTM C533, Type I, 100 °F: 0.41, confirmed against a supplier technical page quoting the C533 Type I limit.
  *   Its other points are from memory.
- * - ASTM C547 Types I and II, C612 Type IVA, C610, C1728 Type III and C591 Type IV: values **from memory** of the
- *   specifications (each material's `confidence` says so); no published reproduction of these tables was found.
- *   For these materials the 2 % fit check below tests the curve against recalled points only.
- * Tolerance 2 %: the tables give k to 2 significant figures (e.g. 0.25, 0.29), so a value is known to about
- * ±0.005 / 0.25 = ±2 %; a fitted curve within 2 % of every point is as good as the table can tell.
+ * - ASTM C547 Types I and II, C612 Type IVA, C610, C1728 Type III and C591 Type IV: recalled values (each
+ *   material's `confidence` and source say so); no published reproduction of these tables was found, so they
+ *   have no check here. That every curve reproduces its own table within 2 % is a property of the library and is
+ *   asserted for all materials in shared/calc/library/library.test.ts.
+ * Stored points are asserted to 12 decimals after the exact unit conversion; the curves within 2 % (the tables
+ * give k to 2 significant figures, e.g. 0.25, so a value is known to about ±0.005 / 0.25 = ±2 %).
  */
 import { conductivityAt } from '../../shared/calc/conduction';
-import { INSULATION_MATERIALS, insulationMaterialById, layerOf } from '../../shared/calc/library/materials';
+import { insulationMaterialById, layerOf } from '../../shared/calc/library/materials';
 import { btuInchPerHourSquareFootFahrenheitToWattsPerMetreKelvin, fahrenheitToCelsius } from '../../shared/calc/units';
 
 const btu = btuInchPerHourSquareFootFahrenheitToWattsPerMetreKelvin;
@@ -26,56 +27,7 @@ function pointAtF(id: string, fahrenheit: number) {
   return insulationMaterialById(id).tablePoints.find((p) => Math.abs(p.meanTemperatureC - t) < 1e-9);
 }
 
-describe('built-in materials', () => {
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
-    'when %s k(T) is evaluated at each table point, then it is within 2 % of the table',
-    (_id, material) => {
-      expect(material.tablePoints.length).toBeGreaterThanOrEqual(3);
-      for (const point of material.tablePoints) {
-        const k = conductivityAt(material.conductivity, point.meanTemperatureC);
-        expect(Math.abs(k / point.conductivityWPerMK - 1)).toBeLessThanOrEqual(0.02);
-      }
-    },
-  );
-
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
-    'when %s k(T) is evaluated over its service range, then it stays positive and finite',
-    (_id, material) => {
-      const span = material.maxServiceTemperatureC - material.minServiceTemperatureC;
-      for (let i = 0; i <= 200; i += 1) {
-        const t = material.minServiceTemperatureC + (span * i) / 200;
-        const k = conductivityAt(material.conductivity, t);
-        expect(Number.isFinite(k)).toBe(true);
-        expect(k).toBeGreaterThan(0);
-      }
-    },
-  );
-
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
-    'when %s is listed, then its source names its ASTM specification and its provenance matches its confidence',
-    (_id, material) => {
-      expect(material.source).toMatch(/ASTM C\d+/);
-      expect(material.maxServiceTemperatureC).toBeGreaterThan(material.minServiceTemperatureC);
-      const confirmed = material.tablePoints.filter((p) => p.confirmed === true).length;
-      switch (material.confidence) {
-        case 'confirmed':
-          expect(confirmed).toBe(material.tablePoints.length);
-          expect(material.source).toMatch(/confirmed against/);
-          expect(material.source).not.toMatch(/from memory/);
-          break;
-        case 'partlyConfirmed':
-          expect(confirmed).toBeGreaterThan(0);
-          expect(confirmed).toBeLessThan(material.tablePoints.length);
-          expect(material.source).toMatch(/confirmed against/);
-          expect(material.source).toMatch(/from memory/);
-          break;
-        default:
-          expect(confirmed).toBe(0);
-          expect(material.source).toMatch(/from memory/);
-      }
-    },
-  );
-
+describe('built-in materials against the published ASTM maxima', () => {
   it.each([
     ['cellular-glass-c552-grade-6', -100, 0.23],
     ['cellular-glass-c552-grade-6', 0, 0.29],
@@ -95,6 +47,8 @@ describe('built-in materials', () => {
       expect(p).toBeDefined();
       expect(p?.conductivityWPerMK).toBeCloseTo(btu(kUs), 12);
       expect(p?.confirmed).toBe(true);
+      const curve = conductivityAt(insulationMaterialById(id).conductivity, fahrenheitToCelsius(fahrenheit));
+      expect(Math.abs(curve / btu(kUs) - 1)).toBeLessThanOrEqual(0.02);
     },
   );
 
@@ -104,14 +58,6 @@ describe('built-in materials', () => {
     const p = pointAtF('cellular-glass-c552-grade-6', 75);
     expect(p?.meanTemperatureC).toBeCloseTo(23.8889, 4);
     expect(p?.conductivityWPerMK).toBeCloseTo(0.04904, 5);
-  });
-
-  it('when no brand could slip in, then names are generic type names', () => {
-    for (const m of INSULATION_MATERIALS) {
-      expect(m.name).toMatch(
-        /^(Mineral-fibre|Calcium silicate|Cellular glass|Rigid polyisocyanurate|Flexible elastomeric|Expanded perlite|Flexible aerogel)/,
-      );
-    }
   });
 
   it('when a layer is made of a material, then it carries the k(T) and service limit', () => {

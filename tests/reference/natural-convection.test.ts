@@ -30,7 +30,7 @@ describe('natural convection, Churchill & Chu', () => {
     expect(Math.abs(Gr / 2.63e9 - 1)).toBeLessThan(0.005);
   });
 
-  it('when the 0.71 m × 1.02 m fire screen at 232 °C faces 23 °C air, then h = Nu·k/L ≈ 7.0 W/m²K and q ≈ 1060 W', () => {
+  it('when the 0.71 m × 1.02 m fire screen at 232 °C faces 23 °C air, then h = Nu·k/L ≈ 7.0 W/m²K and q ≈ 1060 W (from memory)', () => {
     // Source: Incropera & DeWitt, 6th ed., Example 9.2 (glass-door fire screen, L = 0.71 m, width 1.02 m,
     // 232 °C, 23 °C air, film 400 K). The example's Nu_L is the ht doctest value above (147.16, "From [2],
     // Example 9.2, matches"); with k = 0.0338 W/(m·K) from Table A.4 at 400 K (air-table-a4.ts) this gives
@@ -59,8 +59,7 @@ describe('natural convection, Churchill & Chu', () => {
     // Source: S. W. Churchill, H. H. S. Chu, Int. J. Heat Mass Transfer 18 (1975) 1049–1053, Eq. for the
     // isothermal horizontal cylinder, recomputed here with Incropera 6th ed. Table A.4 air rows; radiation
     // by the Stefan–Boltzmann law (Incropera Eq. 1.7). Conditions of Incropera 6th ed. Example 9.3 (steam
-    // pipe; example number from memory). Both sides interpolate the same table linearly, so 0.3 % covers
-    // rounding only.
+    // pipe). Both sides interpolate the same table linearly, so 0.3 % covers rounding only.
     const Ts = 165;
     const Ta = 23;
     const D = 0.1;

@@ -7,7 +7,7 @@ describe('radiation, Stefan–Boltzmann', () => {
     expect(STEFAN_BOLTZMANN).toBe(5.670374419e-8);
   });
 
-  it('when a 70 mm steam pipe at 200 °C (ε 0.8) faces 25 °C walls, then emissive power is 2270 W/m² and irradiation 447 W/m²', () => {
+  it('when a 70 mm steam pipe at 200 °C (ε 0.8) faces 25 °C walls, then emissive power is 2270 W/m² and irradiation 447 W/m² (from memory)', () => {
     // Source: Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, 6th ed., Example 1.2 (D = 70 mm,
     // Ts = 473 K, ε = 0.8, Tsur = 298 K; inputs confirmed by the course code below): E = 2270 W/m²,
     // G = 447 W/m² (these two printed values still from memory). Three significant figures → 0.5 %.
@@ -25,8 +25,8 @@ describe('radiation, Stefan–Boltzmann', () => {
     // (más 577 W por convección)" — and tests/test_radiation.py. Three significant figures → 0.5 %.
     const q = radiativeHeatFlux(0.8, 473, 298) * Math.PI * 0.07;
     expect(Math.abs(q / 421 - 1)).toBeLessThan(0.005);
-    // The convective part, h·πD·(Ts − T∞) with the example's h = 15 W/(m²·K) (from memory; 577 W/m over
-    // π·0.07·175 K gives 15.0), closes the published total of 998 W/m.
+    // The convective part, h·πD·(Ts − T∞) with h = 15 W/(m²·K) — the published 577 W/m over π·0.07 m·175 K,
+    // 15.0 — closes the published total of 998 W/m.
     expect(Math.abs((q + 15 * Math.PI * 0.07 * (473 - 298)) / 998 - 1)).toBeLessThan(0.005);
   });
 

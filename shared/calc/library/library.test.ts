@@ -1,6 +1,7 @@
 import { conductivityAt } from '../conduction';
 import { FINISHES, finishById, finishEmissivityForBasis } from './finishes';
-import { fitConductivityPolynomial, INSULATION_MATERIALS } from './materials';
+import { analyse } from '../analyse';
+import { conductivityDataRange, fitConductivityPolynomial, INSULATION_MATERIALS, insulationMaterialById, layerOf } from './materials';
 import { METRIC_ROUNDING, roundingFromMillimetres, US_ROUNDING } from './series';
 
 describe('fitConductivityPolynomial', () => {
@@ -19,6 +20,93 @@ describe('fitConductivityPolynomial', () => {
 
   it('when material ids are listed, then they are unique', () => {
     expect(new Set(INSULATION_MATERIALS.map((m) => m.id)).size).toBe(INSULATION_MATERIALS.length);
+  });
+});
+
+describe('built-in materials: each k(T) against its own table', () => {
+  // Each material keeps the table points its curve was fitted to; the check is that the curve reproduces every
+  // point within 2 %: the tables give k to two significant figures (e.g. 0.25 Btu·in/(h·ft²·°F)), so a value is
+  // known to about ±0.005 / 0.25 = ±2 %. Which points were checked against a published reproduction of the ASTM
+  // table, and which are recalled, is each point's `confirmed` flag and the material's `confidence`; the
+  // confirmed points are also asserted against their published values in tests/reference/materials.test.ts.
+  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+    'when %s k(T) is evaluated at each table point, then it is within 2 % of the table',
+    (_id, material) => {
+      expect(material.tablePoints.length).toBeGreaterThanOrEqual(3);
+      for (const point of material.tablePoints) {
+        const k = conductivityAt(material.conductivity, point.meanTemperatureC);
+        expect(Math.abs(k / point.conductivityWPerMK - 1)).toBeLessThanOrEqual(0.02);
+      }
+    },
+  );
+
+  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+    'when %s k(T) is evaluated over its service range, then it stays positive and finite',
+    (_id, material) => {
+      const span = material.maxServiceTemperatureC - material.minServiceTemperatureC;
+      for (let i = 0; i <= 200; i += 1) {
+        const t = material.minServiceTemperatureC + (span * i) / 200;
+        const k = conductivityAt(material.conductivity, t);
+        expect(Number.isFinite(k)).toBe(true);
+        expect(k).toBeGreaterThan(0);
+      }
+    },
+  );
+
+  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+    'when %s is listed, then its source names its ASTM specification and its provenance matches its confidence',
+    (_id, material) => {
+      expect(material.source).toMatch(/ASTM C\d+/);
+      expect(material.maxServiceTemperatureC).toBeGreaterThan(material.minServiceTemperatureC);
+      const confirmed = material.tablePoints.filter((p) => p.confirmed === true).length;
+      switch (material.confidence) {
+        case 'confirmed':
+          expect(confirmed).toBe(material.tablePoints.length);
+          expect(material.source).toMatch(/confirmed against/);
+          expect(material.source).not.toMatch(/from memory/);
+          break;
+        case 'partlyConfirmed':
+          expect(confirmed).toBeGreaterThan(0);
+          expect(confirmed).toBeLessThan(material.tablePoints.length);
+          expect(material.source).toMatch(/confirmed against/);
+          expect(material.source).toMatch(/from memory/);
+          break;
+        default:
+          expect(confirmed).toBe(0);
+          expect(material.source).toMatch(/from memory/);
+      }
+    },
+  );
+
+  it('when no brand could slip in, then names are generic type names', () => {
+    for (const m of INSULATION_MATERIALS) {
+      expect(m.name).toMatch(
+        /^(Mineral-fibre|Calcium silicate|Cellular glass|Rigid polyisocyanurate|Flexible elastomeric|Expanded perlite|Flexible aerogel)/,
+      );
+    }
+  });
+
+  it('when a layer is made of a library material, then it carries the lower service limit and the table range', () => {
+    const m = insulationMaterialById('flexible-elastomeric-c534-grade-1-type-i');
+    const layer = layerOf(m, 0.025);
+    expect(layer.minServiceTemperatureC).toBe(m.minServiceTemperatureC);
+    // The table runs from -100 °F to 75 °F.
+    expect(layer.conductivityDataRangeC?.[0]).toBeCloseTo(-73.33, 2);
+    expect(layer.conductivityDataRangeC?.[1]).toBeCloseTo(23.89, 2);
+    expect(conductivityDataRange(m)).toEqual(layer.conductivityDataRangeC);
+  });
+
+  it('when the elastomeric tube insulates a line far colder than its table, then the result warns of the extrapolated k(T)', () => {
+    const at = (processTemperatureC: number) =>
+      analyse({
+        geometry: { type: 'pipe', outerDiameterM: 0.0603, orientation: 'horizontal' },
+        processTemperatureC,
+        layers: [layerOf('flexible-elastomeric-c534-grade-1-type-i', 0.025)],
+        surfaceEmissivity: 0.9,
+        ambient: { airTemperatureC: 25, relativeHumidityPct: 70 },
+      }).warnings.map((w) => w.code);
+    expect(at(-180)).toContain('CONDUCTIVITY_EXTRAPOLATED');
+    expect(at(5)).not.toContain('CONDUCTIVITY_EXTRAPOLATED');
   });
 });
 

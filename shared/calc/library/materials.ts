@@ -357,7 +357,8 @@ export function insulationMaterialById(id: string): InsulationMaterial {
  *
  * @param material - material or its id
  * @param thicknessM - layer thickness [m], ≥ 0
- * @returns the layer for a case, with the material's k(T) and maximum service temperature
+ * @returns the layer for a case, with the material's k(T), service temperature limits and the mean-temperature
+ *   range of its table (so a result warns where the curve is extrapolated)
  * @example layerOf('mineral-fibre-pipe-c547-type-i', 0.05).maxServiceTemperatureC // 454
  */
 export function layerOf(material: InsulationMaterial | string, thicknessM: number): Layer {
@@ -365,5 +366,23 @@ export function layerOf(material: InsulationMaterial | string, thicknessM: numbe
   if (!Number.isFinite(thicknessM) || thicknessM < 0) {
     throw new CalcInputError('thicknessM', 'thicknessM must be zero or a positive number');
   }
-  return { thicknessM, conductivity: [...m.conductivity], maxServiceTemperatureC: m.maxServiceTemperatureC };
+  return {
+    thicknessM,
+    conductivity: [...m.conductivity],
+    maxServiceTemperatureC: m.maxServiceTemperatureC,
+    minServiceTemperatureC: m.minServiceTemperatureC,
+    conductivityDataRangeC: conductivityDataRange(m),
+  };
+}
+
+/**
+ * The mean temperatures a material's k(T) was fitted over: its coldest and hottest table point.
+ *
+ * @param material - a built-in material
+ * @returns `[lowest, highest]` mean temperature [°C]
+ * @example conductivityDataRange(insulationMaterialById('cellular-glass-c552-grade-6')) // ≈ [-73.3, 204.4]
+ */
+export function conductivityDataRange(material: InsulationMaterial): [number, number] {
+  const t = material.tablePoints.map((p) => p.meanTemperatureC);
+  return [Math.min(...t), Math.max(...t)];
 }

@@ -232,6 +232,11 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                   else setLayer(i, { materialId: 'custom', conductivity: padTo3(l.conductivity) });
                 }}
               />
+              {!custom && materialById(l.materialId)?.provenance ? (
+                <Text tone="textMuted" testID={`qs-layer-${i}-provenance`}>
+                  {materialById(l.materialId)?.provenance}
+                </Text>
+              ) : null}
               {custom ? (
                 <>
                   <CoefficientFields
