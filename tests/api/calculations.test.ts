@@ -1,3 +1,5 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { createCalcPool } from '../../server/calculations/calc-pool';
@@ -72,10 +74,20 @@ describe('POST /api/v1/calculations', () => {
     });
     // Wait until the workers have the batch, then ask for health.
     while (server.app.locals.calc.pending() === 0 && !batchDone) await new Promise((r) => setTimeout(r, 5));
-    const health = await fetch(`${server.url}/api/v1/health`);
-    const healthArrivedWhileBatchRan = !batchDone;
-    expect(health.status).toBe(200);
-    expect(healthArrivedWhileBatchRan).toBe(true);
+    // Several health requests in turn while the batch runs; their latencies are written to test-output/ as
+    // evidence (the 200 ms target itself is a benchmark figure: `npm run bench`, not a timed test).
+    const latenciesMs: number[] = [];
+    let answeredWhileBatchRan = 0;
+    for (let i = 0; i < 5 && !batchDone; i += 1) {
+      const t0 = performance.now();
+      const health = await fetch(`${server.url}/api/v1/health`);
+      latenciesMs.push(performance.now() - t0);
+      expect(health.status).toBe(200);
+      if (!batchDone) answeredWhileBatchRan += 1;
+    }
+    expect(answeredWhileBatchRan).toBeGreaterThanOrEqual(1);
+    mkdirSync('test-output', { recursive: true });
+    writeFileSync('test-output/health-during-batch.json', JSON.stringify({ latenciesMs, answeredWhileBatchRan }, null, 2));
     const done = await batch;
     // Error paths index the whole batch, not the chunk a worker saw.
     const withBad = cases.slice(0, 600);
