@@ -612,10 +612,11 @@ export function analyse(input: CalcCase): CalcResult {
     for (const f of partFaces) {
       const inner = li === 0 ? f.innerC : f.outerFacesC[li - 1];
       const outer = f.outerFacesC[li];
+      const mean = (inner + outer) / 2;
       hot = Math.max(hot, inner, outer);
       cold = Math.min(cold, inner, outer);
-      meanLo = Math.min(meanLo, (inner + outer) / 2);
-      meanHi = Math.max(meanHi, (inner + outer) / 2);
+      meanLo = Math.min(meanLo, mean);
+      meanHi = Math.max(meanHi, mean);
     }
     if (layer.maxServiceTemperatureC !== undefined && hot > layer.maxServiceTemperatureC) {
       warnings.push({
@@ -631,11 +632,11 @@ export function analyse(input: CalcCase): CalcResult {
     }
     const range = layer.conductivityDataRangeC;
     const slack = 0.5; // K: tables state whole degrees
-    if (range && (meanLo < range[0] - slack || meanHi > range[1] + slack)) {
-      const mean = meanLo < range[0] - slack ? meanLo : meanHi;
+    const outside = !range ? undefined : meanLo < range[0] - slack ? meanLo : meanHi > range[1] + slack ? meanHi : undefined;
+    if (range && outside !== undefined) {
       warnings.push({
         code: 'CONDUCTIVITY_EXTRAPOLATED',
-        message: `Layer ${n} has a mean temperature of ${mean.toFixed(1)} °C, outside ${range[0].toFixed(1)}…${range[1].toFixed(1)} °C where its conductivity rests on data; k(T) is extrapolated there, so check the result against the product's data.`,
+        message: `Layer ${n} has a mean temperature of ${outside.toFixed(1)} °C, outside ${range[0].toFixed(1)}…${range[1].toFixed(1)} °C where its conductivity rests on data; k(T) is extrapolated there, so check the result against the product's data.`,
       });
     }
   }

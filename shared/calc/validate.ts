@@ -92,6 +92,9 @@ function geometry(v: unknown): Geometry {
   };
 }
 
+/** Bounds of a material's service limits and data range [°C]. */
+const MATERIAL_TEMPERATURE_C = { min: -273.15, max: 3000 } as const;
+
 function layers(v: unknown, solving: boolean): Layer[] {
   if (!Array.isArray(v)) throw new CalcInputError('layers', 'layers must be an array (use [] for a bare surface).', v === undefined ? 'REQUIRED' : 'INVALID_INPUT');
   if (v.length > 20) throw new CalcInputError('layers', 'At most 20 layers.', 'OUT_OF_RANGE');
@@ -115,9 +118,9 @@ function layers(v: unknown, solving: boolean): Layer[] {
     });
     if (k.length === 1 && !(k[0] > 0)) throw new CalcInputError(kf, `${kf}: a constant conductivity must be positive.`, 'CONDUCTIVITY_NOT_POSITIVE');
     const layer: Layer = { thicknessM, conductivity: k.slice() as number[] };
-    const ms = num(o, 'maxServiceTemperatureC', P, { min: -273.15, max: 3000 }, false);
+    const ms = num(o, 'maxServiceTemperatureC', P, MATERIAL_TEMPERATURE_C, false);
     if (ms !== undefined) layer.maxServiceTemperatureC = ms;
-    const mins = num(o, 'minServiceTemperatureC', P, { min: -273.15, max: 3000 }, false);
+    const mins = num(o, 'minServiceTemperatureC', P, MATERIAL_TEMPERATURE_C, false);
     if (mins !== undefined) {
       if (ms !== undefined && mins >= ms) {
         throw new CalcInputError(`${P}.minServiceTemperatureC`, `${P}.minServiceTemperatureC must be below maxServiceTemperatureC.`, 'OUT_OF_RANGE');
@@ -130,7 +133,7 @@ function layers(v: unknown, solving: boolean): Layer[] {
       const ok =
         Array.isArray(range) &&
         range.length === 2 &&
-        range.every((t) => typeof t === 'number' && Number.isFinite(t) && t >= -273.15 && t <= 3000) &&
+        range.every((t) => typeof t === 'number' && t >= MATERIAL_TEMPERATURE_C.min && t <= MATERIAL_TEMPERATURE_C.max) &&
         (range[0] as number) <= (range[1] as number);
       if (!ok) throw new CalcInputError(rf, `${rf} must be [lowest, highest] mean temperatures in °C, lowest first.`);
       layer.conductivityDataRangeC = [range[0] as number, range[1] as number];

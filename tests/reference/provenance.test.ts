@@ -13,7 +13,7 @@ const MAX_FROM_MEMORY = 5;
 type Check = { file: string; title: string; table: boolean; body: string };
 
 /** Splits a test file into its `it(…)` / `it.each(…)` blocks, each up to the next block or describe. */
-export function checksOf(file: string, text: string): Check[] {
+function checksOf(file: string, text: string): Check[] {
   const starts = [...text.matchAll(/^\s*(it\.each|it|describe)\s*[(.[]/gm)].map((m) => ({ at: m.index ?? 0, kind: m[1] }));
   const checks: Check[] = [];
   starts.forEach((s, i) => {

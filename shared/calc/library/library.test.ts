@@ -23,13 +23,15 @@ describe('fitConductivityPolynomial', () => {
   });
 });
 
+const BY_ID = INSULATION_MATERIALS.map((m) => [m.id, m] as const);
+
 describe('built-in materials: each k(T) against its own table', () => {
   // Each material keeps the table points its curve was fitted to; the check is that the curve reproduces every
   // point within 2 %: the tables give k to two significant figures (e.g. 0.25 Btu·in/(h·ft²·°F)), so a value is
   // known to about ±0.005 / 0.25 = ±2 %. Which points were checked against a published reproduction of the ASTM
   // table, and which are recalled, is each point's `confirmed` flag and the material's `confidence`; the
   // confirmed points are also asserted against their published values in tests/reference/materials.test.ts.
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+  it.each(BY_ID)(
     'when %s k(T) is evaluated at each table point, then it is within 2 % of the table',
     (_id, material) => {
       expect(material.tablePoints.length).toBeGreaterThanOrEqual(3);
@@ -40,7 +42,7 @@ describe('built-in materials: each k(T) against its own table', () => {
     },
   );
 
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+  it.each(BY_ID)(
     'when %s k(T) is evaluated over its service range, then it stays positive and finite',
     (_id, material) => {
       const span = material.maxServiceTemperatureC - material.minServiceTemperatureC;
@@ -53,7 +55,7 @@ describe('built-in materials: each k(T) against its own table', () => {
     },
   );
 
-  it.each(INSULATION_MATERIALS.map((m) => [m.id, m] as const))(
+  it.each(BY_ID)(
     'when %s is listed, then its source names its ASTM specification and its provenance matches its confidence',
     (_id, material) => {
       expect(material.source).toMatch(/ASTM C\d+/);

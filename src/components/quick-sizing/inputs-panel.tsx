@@ -218,6 +218,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
       <Card title="Insulation and finish" subtitle="Layers from the inside out." testID="qs-section-layers">
         {d.layers.map((l, i) => {
           const custom = l.materialId === 'custom';
+          const provenance = custom ? undefined : materialById(l.materialId)?.provenance;
           return (
             <View key={i} style={styles.layer} testID={`qs-layer-${i}`}>
               <Text variant="label">{`Layer ${i + 1}${i === 0 ? ' (against the surface)' : ''}`}</Text>
@@ -232,9 +233,9 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                   else setLayer(i, { materialId: 'custom', conductivity: padTo3(l.conductivity) });
                 }}
               />
-              {!custom && materialById(l.materialId)?.provenance ? (
+              {provenance ? (
                 <Text tone="textMuted" testID={`qs-layer-${i}-provenance`}>
-                  {materialById(l.materialId)?.provenance}
+                  {provenance}
                 </Text>
               ) : null}
               {custom ? (
