@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Installs what a fresh machine lacks: Debian packages (MariaDB, and Chromium for browser tests)
+# Installs what a fresh machine lacks: Debian packages (MariaDB, and Chromium and poppler-utils for browser tests)
 # and the npm dependencies from the committed lockfile. Safe to run again; it skips what is there.
 # Usage: scripts/setup.sh [--with-browser]
 set -euo pipefail
@@ -7,7 +7,11 @@ cd "$(dirname "$0")/.."
 
 need=()
 { [ -x /usr/sbin/mariadbd ] && command -v mariadb-admin >/dev/null && command -v mariadb-install-db >/dev/null; } || need+=(mariadb-server mariadb-client)
-if [ "${1:-}" = "--with-browser" ] && [ ! -x /usr/bin/chromium ]; then need+=(chromium); fi
+if [ "${1:-}" = "--with-browser" ]; then
+  [ -x /usr/bin/chromium ] || need+=(chromium)
+  # pdftoppm renders report pages to images for the browser tests' screenshots.
+  command -v pdftoppm >/dev/null || need+=(poppler-utils)
+fi
 if [ ${#need[@]} -gt 0 ]; then
   echo "Installing from Debian's packages: ${need[*]}"
   apt-get update -qq >/dev/null
