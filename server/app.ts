@@ -15,6 +15,11 @@ import { securityHeaders } from './http/security';
 import { loadSessionCaller, sessionMiddleware } from './http/session';
 import { inlineScriptHashes, mountWebApp } from './http/web-app';
 import { registerInvitationRoutes } from './invitations/invitations.routes';
+import { createJobRunner, type JobRunner } from './jobs/job-runner';
+import { registerLibraryRoutes } from './library/library.routes';
+import { registerLineRoutes } from './lines/lines.routes';
+import { SITE_SIZING, siteSizingHandler } from './sizing/sizing.service';
+import { registerSizingRoutes } from './sizing/sizing.routes';
 import { createLogger, type Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 import { registerMeRoutes } from './me/me.routes';
@@ -24,7 +29,7 @@ import { registerTeamRoutes } from './team/team.routes';
 export type AppOptions = { db: Db; mailer: Mailer; config: Config; logger?: Logger; calc?: CalcPool };
 
 export type LaglineApp = Express & {
-  locals: { apiRouter: Router; calc: CalcPool };
+  locals: { apiRouter: Router; calc: CalcPool; jobs: JobRunner };
 };
 
 const CALCULATIONS = '/v1/calculations';
@@ -36,7 +41,9 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
 
-  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: calc ?? createCalcPool(config) };
+  const pool = calc ?? createCalcPool(config);
+  const jobs = createJobRunner({ db, logger, handlers: { [SITE_SIZING]: siteSizingHandler({ db, calc: pool }) } });
+  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: pool, jobs };
 
   app.use(requestId);
   app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls: config.appUrl.startsWith('https:') }));
@@ -63,12 +70,16 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   registerTeamRoutes(api, deps);
   registerMeRoutes(api, deps);
   registerSiteRoutes(api, deps);
+  registerLibraryRoutes(api, deps);
+  registerLineRoutes(api, deps);
+  registerSizingRoutes(api, deps);
   registerDevMailRoutes(api, deps);
   registerCalculationRoutes(api, deps);
   app.use(api);
   app.use('/api', (_req, _res, next) => next(errors.notFound('The API route')));
   app.locals.apiRouter = api;
   app.locals.calc = deps.calc;
+  app.locals.jobs = jobs;
 
   mountWebApp(app, config.distDir);
   app.use(errorHandler(logger));

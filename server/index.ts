@@ -37,6 +37,8 @@ async function main(): Promise<void> {
   }
   const mailer = createMailer({ ...config, smtp: { host: config.smtp.host, port: catcher?.port ?? config.smtp.port } });
   const app = createApp({ db, mailer, config, logger });
+  // Jobs interrupted by a stop (or left by another process that stopped) continue here.
+  app.locals.jobs.start();
 
   const server = app.listen(config.port, config.host, () => {
     const { port } = server.address() as AddressInfo;
@@ -62,6 +64,7 @@ async function main(): Promise<void> {
     logger.info(`${signal}: shutting down`);
     (setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout).unref();
     server.close(async () => {
+      await app.locals.jobs.stop().catch(() => undefined);
       await app.locals.calc.close().catch(() => undefined);
       await catcher?.close().catch(() => undefined);
       mailer.close();

@@ -2,15 +2,25 @@ import { setMaxListeners } from 'node:events';
 import path from 'node:path';
 import { Piscina } from 'piscina';
 import type { Config } from '../config';
+import type { SizedItem } from '../../shared/calc/sizing/batch';
+import type { SizingContext, SizingTask } from '../../shared/calc/sizing/types';
 import { errors } from '../errors';
 
 export type CalcPool = {
   /** Runs the cases in worker threads, in chunks so other requests interleave; results in order. */
   run: (cases: unknown[]) => Promise<unknown[]>;
+  /**
+   * Sizes a site's items in worker threads, a few chunks at a time so interactive requests keep their turn;
+   * results in order.
+   */
+  runSizing: (ctx: SizingContext, tasks: SizingTask[]) => Promise<SizedItem[]>;
   /** Chunks queued or running now. */
   pending: () => number;
   close: () => Promise<void>;
 };
+
+/** Items per worker task when sizing a site. */
+const SIZING_CHUNK = 50;
 
 const queueFull = () => errors.unavailable('BUSY', 'The calculation queue is full; try again in a moment.');
 
@@ -63,6 +73,27 @@ export function createCalcPool(config: Pick<Config, 'calc'>, workerFile = path.j
         }
         throw e;
       }
+    },
+    runSizing: async (ctx, tasks) => {
+      const p = get();
+      const size = SIZING_CHUNK;
+      const out = new Array<SizedItem>(tasks.length);
+      let next = 0;
+      const worker = async () => {
+        while (next < tasks.length) {
+          const start = next;
+          next += size;
+          inFlight++;
+          try {
+            const part = (await p.run({ kind: 'sizeItems', ctx, tasks: tasks.slice(start, start + size) })) as SizedItem[];
+            for (let k = 0; k < part.length; k++) out[start + k] = part[k];
+          } finally {
+            inFlight--;
+          }
+        }
+      };
+      await Promise.all(Array.from({ length: Math.max(1, config.calc.maxThreads) }, worker));
+      return out;
     },
     pending: () => inFlight,
     close: async () => {

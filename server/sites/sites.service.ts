@@ -5,6 +5,7 @@ import type { Caller } from '../auth/auth.service';
 import { type Db, inTransaction } from '../db/db';
 import { errors } from '../errors';
 import { findMember } from '../team/teams.repository';
+import { refreshSiteInputHashes } from '../sizing/sizing-context';
 import * as repo from './sites.repository';
 
 /** Defaults a new site starts from (SI, °C); every value is editable. */
@@ -67,6 +68,8 @@ export async function updateSite(deps: { db: Db }, caller: Caller, id: number, p
       description: patch.description,
       designBases: patch.designBases ? { ...site.designBases, ...patch.designBases } : undefined,
     });
+    // Bases feed every item's sizing: the items whose numbers change read as stale now.
+    if (patch.designBases) await refreshSiteInputHashes(trx, caller.teamId, id);
     await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.updated', targetType: 'site', targetId: id, details: { fields: Object.keys(patch) }, ip });
     return (await repo.findSite(trx, caller.teamId, id))!;
   });

@@ -4,3 +4,4 @@ export * from './team';
 export * from './settings';
 export * from './sites';
 export * from './permissions';
+export * from './lines';

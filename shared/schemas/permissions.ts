@@ -21,7 +21,10 @@ export const PERMISSIONS = {
   'site.delete': ['owner'],
   /** Invite contractors to a site. */
   'site.members': ['owner', 'engineer'],
+  /** Add, edit and delete lines and vessels; size a site. */
   'lines.edit': ['owner', 'engineer'],
+  /** Add and edit the team's own materials and finishes. */
+  'library.edit': ['owner', 'engineer'],
   'revisions.issue': ['owner', 'engineer'],
   'schedule.import': ['owner', 'engineer', 'contractor'],
   'surfaces.create': ['owner', 'engineer', 'safety', 'contractor'],

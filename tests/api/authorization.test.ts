@@ -4,6 +4,7 @@ import { insertPasswordReset } from '../../server/auth/password-resets.repositor
 import { newToken } from '../../server/auth/passwords';
 import { type ListedRoute, listRoutes, publicRoute, route } from '../../server/http/routes';
 import { insertInvitation } from '../../server/invitations/invitations.repository';
+import { insertJob } from '../../server/jobs/jobs.repository';
 import { addSiteMember, insertSite } from '../../server/sites/sites.repository';
 import { ROLES, type Role } from '../../shared/schemas/common';
 import type { Permission } from '../../shared/schemas/permissions';
@@ -78,6 +79,30 @@ const SPEC: Record<string, 'public' | 'signedIn' | { permission: Permission; rol
   'DELETE /api/v1/sites/:id/members/:userId': { permission: 'site.members', roles: ['owner', 'engineer'] },
   'GET /api/v1/dev/mail': { permission: 'dev.mail', roles: ['owner'] },
   'POST /api/v1/calculations': 'public',
+  'GET /api/v1/sites/:siteId/lines': { permission: 'site.read', roles: ALL },
+  'POST /api/v1/sites/:siteId/lines': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'POST /api/v1/sites/:siteId/lines/bulk': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/lines/:id': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/lines/:id': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'DELETE /api/v1/lines/:id': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/sites/:siteId/vessels': { permission: 'site.read', roles: ALL },
+  'POST /api/v1/sites/:siteId/vessels': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'POST /api/v1/sites/:siteId/vessels/bulk': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/vessels/:id': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/vessels/:id': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'DELETE /api/v1/vessels/:id': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/library': { permission: 'site.read', roles: ALL },
+  'POST /api/v1/library/materials': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'PATCH /api/v1/library/materials/:id': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'DELETE /api/v1/library/materials/:id': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'POST /api/v1/library/finishes': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'PATCH /api/v1/library/finishes/:id': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'DELETE /api/v1/library/finishes/:id': { permission: 'library.edit', roles: ['owner', 'engineer'] },
+  'POST /api/v1/sites/:siteId/sizing': { permission: 'lines.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/jobs/:id': 'signedIn',
+  'GET /api/v1/sites/:siteId/overview': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/sizing-settings': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/sites/:siteId/sizing-settings': { permission: 'site.edit', roles: ['owner', 'engineer'] },
 };
 
 type Sample = { path: string; body?: unknown };
@@ -94,6 +119,23 @@ const freshInvitation = async () => {
   });
   return { id, token };
 };
+const LINE = { service: 'Steam', nps: '4', lengthM: 20, operatingTemperatureC: 180, purposes: ['personnelProtection'] };
+const VESSEL = { diameterM: 2, lengthM: 5, operatingTemperatureC: 150, purposes: ['personnelProtection'] };
+const POINTS = [
+  { meanTemperatureC: 0, conductivityWPerMK: 0.034 },
+  { meanTemperatureC: 100, conductivityWPerMK: 0.045 },
+  { meanTemperatureC: 200, conductivityWPerMK: 0.06 },
+];
+const MATERIAL = { source: 'Test datasheet, rev. 1', tablePoints: POINTS, maxServiceTemperatureC: 250, minServiceTemperatureC: -20 };
+const FINISH = { source: 'Test datasheet, rev. 1', emissivity: 0.3, contactMaterial: 'uncoatedMetal' };
+async function created(path: string, body: object, key: string): Promise<number> {
+  const res = await owner.post(path).set('X-CSRF-Token', owner.csrf).send(body).expect(201);
+  return res.body[key].id;
+}
+const freshLine = () => created(`/api/v1/sites/${siteId}/lines`, { ...LINE, tag: `L-${n++}` }, 'line');
+const freshVessel = () => created(`/api/v1/sites/${siteId}/vessels`, { ...VESSEL, tag: `V-${n++}` }, 'vessel');
+const freshMaterial = () => created('/api/v1/library/materials', { ...MATERIAL, name: `Foam ${n++}` }, 'material');
+const freshFinish = () => created('/api/v1/library/finishes', { ...FINISH, name: `Sheet ${n++}` }, 'finish');
 const freshSite = () => insertSite(ctx.db, { teamId, name: `Doomed ${n++}`, description: '', designBases: {}, createdBy: ownerId });
 
 /** A request each route answers with success when the caller may use it. Every route needs one. */
@@ -139,6 +181,32 @@ const SAMPLES: Record<string, () => Promise<Sample>> = {
   },
   'GET /api/v1/dev/mail': async () => ({ path: '/api/v1/dev/mail' }),
   'POST /api/v1/calculations': async () => ({ path: '/api/v1/calculations', body: CASE }),
+  'GET /api/v1/sites/:siteId/lines': async () => ({ path: `/api/v1/sites/${siteId}/lines` }),
+  'POST /api/v1/sites/:siteId/lines': async () => ({ path: `/api/v1/sites/${siteId}/lines`, body: { ...LINE, tag: `L-${n++}` } }),
+  'POST /api/v1/sites/:siteId/lines/bulk': async () => ({ path: `/api/v1/sites/${siteId}/lines/bulk`, body: { ids: [await freshLine()], purposes: ['heatConservation'] } }),
+  'GET /api/v1/lines/:id': async () => ({ path: `/api/v1/lines/${await freshLine()}` }),
+  'PATCH /api/v1/lines/:id': async () => ({ path: `/api/v1/lines/${await freshLine()}`, body: { notes: 'checked' } }),
+  'DELETE /api/v1/lines/:id': async () => ({ path: `/api/v1/lines/${await freshLine()}` }),
+  'GET /api/v1/sites/:siteId/vessels': async () => ({ path: `/api/v1/sites/${siteId}/vessels` }),
+  'POST /api/v1/sites/:siteId/vessels': async () => ({ path: `/api/v1/sites/${siteId}/vessels`, body: { ...VESSEL, tag: `V-${n++}` } }),
+  'POST /api/v1/sites/:siteId/vessels/bulk': async () => ({ path: `/api/v1/sites/${siteId}/vessels/bulk`, body: { ids: [await freshVessel()], purposes: ['heatConservation'] } }),
+  'GET /api/v1/vessels/:id': async () => ({ path: `/api/v1/vessels/${await freshVessel()}` }),
+  'PATCH /api/v1/vessels/:id': async () => ({ path: `/api/v1/vessels/${await freshVessel()}`, body: { notes: 'checked' } }),
+  'DELETE /api/v1/vessels/:id': async () => ({ path: `/api/v1/vessels/${await freshVessel()}` }),
+  'GET /api/v1/library': async () => ({ path: '/api/v1/library' }),
+  'POST /api/v1/library/materials': async () => ({ path: '/api/v1/library/materials', body: { ...MATERIAL, name: `Foam ${n++}` } }),
+  'PATCH /api/v1/library/materials/:id': async () => ({ path: `/api/v1/library/materials/${await freshMaterial()}`, body: { notes: 'checked' } }),
+  'DELETE /api/v1/library/materials/:id': async () => ({ path: `/api/v1/library/materials/${await freshMaterial()}` }),
+  'POST /api/v1/library/finishes': async () => ({ path: '/api/v1/library/finishes', body: { ...FINISH, name: `Sheet ${n++}` } }),
+  'PATCH /api/v1/library/finishes/:id': async () => ({ path: `/api/v1/library/finishes/${await freshFinish()}`, body: { emissivity: 0.35 } }),
+  'DELETE /api/v1/library/finishes/:id': async () => ({ path: `/api/v1/library/finishes/${await freshFinish()}` }),
+  'POST /api/v1/sites/:siteId/sizing': async () => ({ path: `/api/v1/sites/${siteId}/sizing`, body: {} }),
+  'GET /api/v1/jobs/:id': async () => ({
+    path: `/api/v1/jobs/${await insertJob(ctx.db, { teamId, siteId, kind: 'siteSizing', params: {}, total: 0, createdBy: ownerId })}`,
+  }),
+  'GET /api/v1/sites/:siteId/overview': async () => ({ path: `/api/v1/sites/${siteId}/overview` }),
+  'GET /api/v1/sites/:siteId/sizing-settings': async () => ({ path: `/api/v1/sites/${siteId}/sizing-settings` }),
+  'PATCH /api/v1/sites/:siteId/sizing-settings': async () => ({ path: `/api/v1/sites/${siteId}/sizing-settings`, body: { heatConservationMaxPercentOfBare: 5 + (n++ % 10) } }),
 };
 
 async function agentFor(role: Role | 'anonymous'): Promise<Agent> {
@@ -160,7 +228,7 @@ function expectedOutcome(r: ListedRoute, who: Role | 'anonymous'): 'allowed' | 4
 describe('route registry', () => {
   it('when the API router is listed, then every route declares an access rule as its first step', () => {
     const routes = listRoutes(ctx.app.locals.apiRouter);
-    expect(routes.length).toBeGreaterThanOrEqual(25);
+    expect(routes.length).toBeGreaterThanOrEqual(45);
     const missing = routes.filter((r) => !r.rule).map((r) => `${r.method} ${r.path}`);
     expect(missing).toEqual([]);
   });

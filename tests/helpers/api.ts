@@ -50,7 +50,10 @@ export async function createApiContext(opts: { seed?: boolean; config?: Partial<
       return agent;
     },
     close: async () => {
-      for (const a of apps) await a.locals.calc.close();
+      for (const a of apps) {
+        await a.locals.jobs.stop();
+        await a.locals.calc.close();
+      }
       mailer.close();
       await mail.close();
       await database.drop();

@@ -1,0 +1,195 @@
+import { annualCo2, energyCost, fuelEnergyKWh } from '../../shared/calc/energy';
+import type { SizingSettingsInput } from '../../shared/schemas/lines';
+import { insertAudit } from '../audit/audit.repository';
+import type { Caller } from '../auth/auth.service';
+import type { CalcPool } from '../calculations/calc-pool';
+import { type Db, inTransaction } from '../db/db';
+import { errors } from '../errors';
+import type { JobControl } from '../jobs/job-runner';
+import { findActiveJob, findJob, insertJob, type Job } from '../jobs/jobs.repository';
+import { countSiteItems, listSiteItems, siteCounts, siteTotalsByService, upsertResults } from '../lines/items.repository';
+import { visibleTo } from '../lines/items.service';
+import { findSite } from '../sites/sites.repository';
+import { loadSizingContext, refreshSiteInputHashes, storedSettingsOf, taskOf } from './sizing-context';
+import { readSiteSizing, writeSiteSizingSettings } from './sizing.repository';
+
+export const SITE_SIZING = 'siteSizing';
+
+/** Items read, sized and stored per step of the job (one transaction each). */
+const STEP_ITEMS = 500;
+
+async function siteOrNotFound(db: Db, caller: Caller, siteId: number) {
+  const site = await findSite(db, caller.teamId, siteId, visibleTo(caller));
+  if (!site) throw errors.notFound('The site');
+  return site;
+}
+
+export function jobView(j: Job) {
+  return {
+    id: j.id,
+    kind: j.kind,
+    siteId: j.siteId,
+    status: j.status,
+    done: Math.min(j.done, j.total),
+    total: j.total,
+    error: j.error,
+    createdAt: j.createdAt,
+    startedAt: j.startedAt,
+    finishedAt: j.finishedAt,
+  };
+}
+
+/** Queues the sizing of a whole site (or hands back the one already queued or running). */
+export async function startSiteSizing(deps: { db: Db }, caller: Caller, siteId: number, ip?: string) {
+  return inTransaction(deps.db, async (trx) => {
+    await siteOrNotFound(trx, caller, siteId);
+    const active = await findActiveJob(trx, siteId, SITE_SIZING);
+    if (active) return { job: jobView(active), created: false };
+    const total = await countSiteItems(trx, siteId);
+    const id = await insertJob(trx, { teamId: caller.teamId, siteId, kind: SITE_SIZING, params: {}, total, createdBy: caller.userId });
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.sizing_started', targetType: 'site', targetId: siteId, details: { jobId: id, items: total }, ip });
+    return { job: jobView((await findJob(trx, caller.teamId, id)) as Job), created: true };
+  });
+}
+
+export async function getJob(deps: { db: Db }, caller: Caller, id: number) {
+  const job = await findJob(deps.db, caller.teamId, id);
+  if (!job || (job.siteId !== null && !(await findSite(deps.db, caller.teamId, job.siteId, visibleTo(caller))))) throw errors.notFound('The job');
+  return jobView(job);
+}
+
+/**
+ * The job's work: the site's items in id order from the progress mark, STEP_ITEMS at a time, sized in the
+ * worker pool and stored with the fingerprint of the inputs they came from, one transaction per step.
+ */
+export function siteSizingHandler(deps: { db: Db; calc: CalcPool }) {
+  return async (job: Job, ctl: JobControl): Promise<void> => {
+    const siteId = job.siteId as number;
+    const ctx = await loadSizingContext(deps.db, job.teamId, siteId);
+    let cursor = job.cursorId;
+    for (;;) {
+      const items = await listSiteItems(deps.db, siteId, { afterId: cursor, limit: STEP_ITEMS });
+      if (items.length === 0) return;
+      const sized = await deps.calc.runSizing(ctx, items.map(taskOf));
+      const sizedAt = new Date();
+      cursor = items[items.length - 1].id;
+      await deps.db.transaction(async (trx) => {
+        await upsertResults(
+          trx,
+          items.map((it, k) => ({ itemId: it.id, siteId, inputHash: sized[k].inputHash || it.inputHash, result: sized[k].result, sizedAt })),
+        );
+        await ctl.progress(items.length, cursor, trx);
+      });
+    }
+  };
+}
+
+export async function getSizingSettings(deps: { db: Db }, caller: Caller, siteId: number) {
+  await siteOrNotFound(deps.db, caller, siteId);
+  const row = await readSiteSizing(deps.db, caller.teamId, siteId);
+  return storedSettingsOf(row?.sizingSettings ?? null);
+}
+
+/** Changes a site's series, rules or default build-ups; the items whose numbers change read as stale. */
+export async function updateSizingSettings(deps: { db: Db }, caller: Caller, siteId: number, patch: SizingSettingsInput, ip?: string) {
+  return inTransaction(deps.db, async (trx) => {
+    await siteOrNotFound(trx, caller, siteId);
+    const row = await readSiteSizing(trx, caller.teamId, siteId);
+    const before = storedSettingsOf(row?.sizingSettings ?? null);
+    const next = {
+      ...before,
+      ...patch,
+      seriesMm: patch.seriesMm ? [...new Set(patch.seriesMm)].sort((a, b) => a - b) : before.seriesMm,
+      defaultBuildUps: { ...before.defaultBuildUps, ...(patch.defaultBuildUps ?? {}) },
+    };
+    const fields = (Object.keys(next) as (keyof typeof next)[]).filter((k) => JSON.stringify(next[k]) !== JSON.stringify(before[k]));
+    if (fields.length === 0) return before;
+    const ctx = await loadSizingContext(trx, caller.teamId, siteId);
+    for (const kind of ['hot', 'cold'] as const) {
+      const b = next.defaultBuildUps[kind];
+      b.layers.forEach((l, i) => {
+        if (!ctx.library.materials.some((m) => m.id === l.materialId)) {
+          throw errors.badRequest('UNKNOWN_MATERIAL', `There is no material "${l.materialId}" in the library.`, `defaultBuildUps.${kind}.layers[${i}].materialId`);
+        }
+        if (i < b.layers.length - 1 && !(l.thicknessM && l.thicknessM > 0)) {
+          throw errors.badRequest('REQUIRED', `Layer ${i + 1} needs its thickness (only the outermost layer is sized).`, `defaultBuildUps.${kind}.layers[${i}].thicknessM`);
+        }
+      });
+      if (!b.fixed && b.layers.length === 0) throw errors.badRequest('REQUIRED', 'A default build-up needs at least one layer.', `defaultBuildUps.${kind}.layers`);
+      if (!ctx.library.finishes.some((f) => f.id === b.finishId)) {
+        throw errors.badRequest('UNKNOWN_FINISH', `There is no finish "${b.finishId}" in the library.`, `defaultBuildUps.${kind}.finishId`);
+      }
+    }
+    if (next.maxSingleLayerMm > next.maxThicknessMm) {
+      throw errors.badRequest('VALIDATION_FAILED', 'The largest single layer must not exceed the largest thickness.', 'maxSingleLayerMm');
+    }
+    await writeSiteSizingSettings(trx, caller.teamId, siteId, next);
+    await refreshSiteInputHashes(trx, caller.teamId, siteId);
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.sizing_settings_updated', targetType: 'site', targetId: siteId, details: { fields }, ip });
+    return next;
+  });
+}
+
+type EnergyBasisFields = {
+  operatingHoursPerYear?: number;
+  energyPricePerKWh?: number;
+  currency?: string;
+  heatSourceEfficiency?: number;
+  co2KgPerKWh?: number;
+  co2Basis?: string;
+};
+
+/** Purchased energy, cost and CO₂ of a year's heat at the site's energy basis. */
+function costOf(heatKWh: number, basis: EnergyBasisFields) {
+  if (basis.energyPricePerKWh === undefined) return null;
+  const purchasedKWh = fuelEnergyKWh(heatKWh, basis.heatSourceEfficiency ?? 1);
+  return {
+    cost: energyCost(purchasedKWh, { amount: String(basis.energyPricePerKWh), per: 'kWh' }).text,
+    co2Tonnes: basis.co2KgPerKWh === undefined ? null : annualCo2(purchasedKWh, { kgCo2PerKWh: basis.co2KgPerKWh, basis: basis.co2Basis || 'as set in the site\'s energy basis' }).tonnes,
+    purchasedKWh,
+  };
+}
+
+/** Totals of a site for its overview: heat loss, energy, cost, CO₂, saving against bare, failing, stale, unsized. */
+export async function siteOverview(deps: { db: Db }, caller: Caller, siteId: number) {
+  const site = await siteOrNotFound(deps.db, caller, siteId);
+  const [counts, byService] = await Promise.all([siteCounts(deps.db, siteId), siteTotalsByService(deps.db, siteId)]);
+  const energy = (site.designBases.energy ?? {}) as EnergyBasisFields;
+  const sum = (k: 'heatLossW' | 'bareHeatLossW' | 'annualEnergyKWh' | 'bareAnnualEnergyKWh') => byService.reduce((s, r) => s + r[k], 0);
+  const annual = sum('annualEnergyKWh');
+  const bareAnnual = sum('bareAnnualEnergyKWh');
+  const cost = costOf(annual, energy);
+  const bareCost = costOf(bareAnnual, energy);
+  const services = new Map<string, { service: string; heatLossW: number; annualEnergyKWh: number; items: number }>();
+  for (const r of byService) {
+    const name = r.service || '(no service)';
+    const s = services.get(name) ?? { service: name, heatLossW: 0, annualEnergyKWh: 0, items: 0 };
+    s.heatLossW += r.heatLossW;
+    s.annualEnergyKWh += r.annualEnergyKWh;
+    s.items += r.items;
+    services.set(name, s);
+  }
+  const kinds = { line: { items: 0, unsized: 0, stale: 0, failing: 0 }, vessel: { items: 0, unsized: 0, stale: 0, failing: 0 } };
+  for (const c of counts) kinds[c.kind] = { items: c.items, unsized: c.unsized, stale: c.stale, failing: c.failing };
+  return {
+    siteId,
+    counts: kinds,
+    heatLossKW: sum('heatLossW') / 1000,
+    bareHeatLossKW: sum('bareHeatLossW') / 1000,
+    annualEnergyMWh: annual / 1000,
+    bareAnnualEnergyMWh: bareAnnual / 1000,
+    currency: energy.currency ?? null,
+    annualCost: cost?.cost ?? null,
+    bareAnnualCost: bareCost?.cost ?? null,
+    annualCo2Tonnes: cost?.co2Tonnes ?? null,
+    bareAnnualCo2Tonnes: bareCost?.co2Tonnes ?? null,
+    basis: {
+      operatingHoursPerYear: energy.operatingHoursPerYear ?? null,
+      energyPricePerKWh: energy.energyPricePerKWh ?? null,
+      heatSourceEfficiency: energy.heatSourceEfficiency ?? null,
+      co2KgPerKWh: energy.co2KgPerKWh ?? null,
+      co2Basis: energy.co2Basis ?? null,
+    },
+    byService: [...services.values()].sort((a, b) => Math.abs(b.heatLossW) - Math.abs(a.heatLossW)),
+  };
+}
