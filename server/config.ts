@@ -21,6 +21,8 @@ export type Config = {
   trustProxy: boolean | number | string;
   bcryptCost: number;
   distDir: string;
+  /** Where uploaded files (schedules, photos) are kept: outside the web root, under generated names. */
+  uploadDir: string;
   rateLimits: { signin: RateLimitRule; passwordReset: RateLimitRule; invite: RateLimitRule; calculations: RateLimitRule };
   calc: { maxThreads: number; maxQueue: number; chunkSize: number };
   logLevel: 'silent' | 'error' | 'info';
@@ -116,6 +118,7 @@ export function loadConfig(env: Env = process.env): Config {
     trustProxy,
     bcryptCost: int(env, 'BCRYPT_COST', 12, problems, 4, 15),
     distDir: env.DIST_DIR || path.join(ROOT, 'dist'),
+    uploadDir: env.UPLOAD_DIR || path.join(ROOT, '.uploads', nodeEnv),
     rateLimits: {
       signin: { windowMs: 15 * 60_000, limit: int(env, 'RATE_LIMIT_SIGNIN', 10, problems, 1, 1_000_000) },
       passwordReset: { windowMs: 60 * 60_000, limit: int(env, 'RATE_LIMIT_RESET', 5, problems, 1, 1_000_000) },
