@@ -6,4 +6,13 @@ import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 
 /** What route modules receive from createApp. */
-export type Deps = { db: Db; mailer: Mailer; config: Config; logger: Logger; limiters: Limiters; calc: CalcPool };
+export type Deps = {
+  db: Db;
+  mailer: Mailer;
+  config: Config;
+  logger: Logger;
+  limiters: Limiters;
+  calc: CalcPool;
+  /** APP_URL is https: cookies are marked Secure on every answer. */
+  secureCookies: boolean;
+};
