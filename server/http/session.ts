@@ -158,9 +158,9 @@ export async function signInWithPayload(deps: { db: Db }, req: Request, userId: 
   return sessionPayload(deps, (await loadCaller(deps, userId, teamId)) ?? undefined, token);
 }
 
-/** Ends the session on purpose: its row goes from the store. */
+/** Ends the session on purpose: its row goes from the store. A visitor has no row to remove. */
 export async function endSession(req: Request): Promise<void> {
-  if (req.session) await call((cb) => req.session.destroy(cb));
+  if (req.session?.userId !== undefined) await call((cb) => req.session.destroy(cb));
 }
 
 /**

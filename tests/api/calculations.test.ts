@@ -181,7 +181,7 @@ describe('health', () => {
       expect(session.status).toBe(503);
       expect(session.body.errors[0].code).toBe('SERVICE_UNAVAILABLE');
     } finally {
-      await app.locals.calc.close();
+      await app.locals.close();
       await dead.destroy();
     }
   });
