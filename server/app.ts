@@ -9,6 +9,7 @@ import { registerDevMailRoutes } from './dev/dev-mail.routes';
 import { errorHandler, errors } from './errors';
 import { registerHealthRoutes } from './health/health.routes';
 import { csrfProtection } from './http/csrf';
+import { boundJsonDepth } from './http/json-depth';
 import { createLimiters } from './http/rate-limits';
 import { requestId } from './http/request-id';
 import { securityHeaders } from './http/security';
@@ -29,7 +30,13 @@ import { registerTeamRoutes } from './team/team.routes';
 export type AppOptions = { db: Db; mailer: Mailer; config: Config; logger?: Logger; calc?: CalcPool };
 
 export type LaglineApp = Express & {
-  locals: { apiRouter: Router; calc: CalcPool; jobs: JobRunner };
+  locals: {
+    apiRouter: Router;
+    calc: CalcPool;
+    jobs: JobRunner;
+    /** Stops what the app runs in the background (worker threads, the session expiry sweep). */
+    close: () => Promise<void>;
+  };
 };
 
 const CALCULATIONS = '/v1/calculations';
@@ -41,27 +48,45 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
 
+  // APP_URL is what browsers see: https there means every cookie is Secure, whatever the hop to us.
+  const tls = config.appUrl.startsWith('https:');
   const pool = calc ?? createCalcPool(config);
   const jobs = createJobRunner({ db, logger, handlers: { [SITE_SIZING]: siteSizingHandler({ db, calc: pool }) } });
-  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: pool, jobs };
+  const deps: Deps = {
+    db,
+    mailer,
+    config,
+    logger,
+    limiters: createLimiters(config),
+    calc: pool,
+    jobs,
+    secureCookies: tls,
+  };
 
   app.use(requestId);
-  app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls: config.appUrl.startsWith('https:') }));
+  app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls }));
+  // API answers are per caller (sessions, team data): no shared or browser cache keeps them.
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
 
   const isCalculation = (req: Request) => req.path === CALCULATIONS;
   // Batches of cases may be large; everything else stays small.
   const bigJson = express.json({ limit: '12mb' });
   const smallJson = express.json({ limit: '100kb' });
   app.use('/api', (req, res, next) => (isCalculation(req) ? bigJson : smallJson)(req, res, next));
+  app.use('/api', boundJsonDepth());
 
   // Calculations are stateless: no session, no CSRF token.
   const exceptCalculations =
     (handler: RequestHandler): RequestHandler =>
     (req, res, next) =>
       isCalculation(req) ? next() : handler(req, res, next);
-  app.use('/api', exceptCalculations(sessionMiddleware(db, config)));
+  const sessions = sessionMiddleware(deps, { secureCookies: tls });
+  app.use('/api', exceptCalculations(sessions.middleware));
   app.use('/api', exceptCalculations(loadSessionCaller(deps)));
-  app.use('/api', csrfProtection({ appOrigin: new URL(config.appUrl).origin, exempt: isCalculation }));
+  app.use('/api', csrfProtection({ appOrigin: new URL(config.appUrl).origin, secret: config.sessionSecret, secureCookies: tls, exempt: isCalculation }));
 
   const api = express.Router();
   registerHealthRoutes(api, deps);
@@ -80,6 +105,11 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.locals.apiRouter = api;
   app.locals.calc = deps.calc;
   app.locals.jobs = jobs;
+  app.locals.close = async () => {
+    await jobs.stop();
+    sessions.close();
+    await deps.calc.close();
+  };
 
   mountWebApp(app, config.distDir);
   app.use(errorHandler(logger));

@@ -32,6 +32,21 @@ describe('loadConfig', () => {
     }
   });
 
+  it('when the database bound, session sweep and sign-up limits are set, then they apply; without them the defaults do', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'lagline-secret-'));
+    const defaults = loadConfig({ SECRET_DIR: dir });
+    expect(defaults).toMatchObject({ dbTimeoutMs: 5000, sessionCleanupMs: 15 * 60_000 });
+    expect(defaults.rateLimits.signup).toEqual({ windowMs: 3_600_000, limit: 5 });
+    expect(defaults.rateLimits.signupAttempts).toEqual({ windowMs: 3_600_000, limit: 30 });
+    expect(loadConfig({ SECRET_DIR: dir, NODE_ENV: 'test' }).sessionCleanupMs).toBe(0);
+    const set = loadConfig({ SECRET_DIR: dir, DB_TIMEOUT_MS: '1500', SESSION_CLEANUP_MINUTES: '5', RATE_LIMIT_SIGNUP: '2', RATE_LIMIT_SIGNUP_ATTEMPTS: '9' });
+    expect(set).toMatchObject({ dbTimeoutMs: 1500, sessionCleanupMs: 5 * 60_000 });
+    expect(set.rateLimits.signup.limit).toBe(2);
+    expect(set.rateLimits.signupAttempts.limit).toBe(9);
+    expect(() => loadConfig({ SECRET_DIR: dir, DB_TIMEOUT_MS: '10' })).toThrow(/DB_TIMEOUT_MS/);
+    fs.rmSync(dir, { recursive: true, force: true });
+  });
+
   it('when running in production without SESSION_SECRET, then start-up refuses', () => {
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow(/SESSION_SECRET is required/);
     const c = loadConfig({ NODE_ENV: 'production', SESSION_SECRET: 's'.repeat(40) });

@@ -9,11 +9,18 @@ export type Config = {
   port: number;
   host: string;
   db: { host: string; port: number; name: string; user: string; password: string };
+  /**
+   * Bound on one piece of database work [ms]: connecting, waiting for a pooled connection, and each
+   * query (sessions included). Past it the request answers 503 instead of hanging.
+   */
+  dbTimeoutMs: number;
   sessionSecret: string;
   /** Idle timeout: the cookie's rolling max age [ms]. */
   sessionIdleMs: number;
   /** Absolute timeout from sign-in [ms]. */
   sessionAbsoluteMs: number;
+  /** How often expired session rows are deleted [ms]; 0 turns the sweep off. */
+  sessionCleanupMs: number;
   smtp: { host: string; port: number };
   mailFrom: string;
   appUrl: string;
@@ -23,7 +30,16 @@ export type Config = {
   distDir: string;
   /** Where uploaded files (schedules, photos) are kept: outside the web root, under generated names. */
   uploadDir: string;
-  rateLimits: { signin: RateLimitRule; passwordReset: RateLimitRule; invite: RateLimitRule; calculations: RateLimitRule };
+  rateLimits: {
+    signin: RateLimitRule;
+    /** Successful sign-ups (new teams) per client IP. */
+    signup: RateLimitRule;
+    /** Every sign-up attempt per client IP (bcrypt work), separate from sign-in's counter. */
+    signupAttempts: RateLimitRule;
+    passwordReset: RateLimitRule;
+    invite: RateLimitRule;
+    calculations: RateLimitRule;
+  };
   calc: { maxThreads: number; maxQueue: number; chunkSize: number };
   logLevel: 'silent' | 'error' | 'info';
 };
@@ -108,9 +124,11 @@ export function loadConfig(env: Env = process.env): Config {
       user: env.DB_USER || 'lagline',
       password: env.DB_PASSWORD ?? 'lagline-dev-password',
     },
+    dbTimeoutMs: int(env, 'DB_TIMEOUT_MS', 5000, problems, 100, 600_000),
     sessionSecret,
     sessionIdleMs: int(env, 'SESSION_IDLE_MINUTES', 8 * 60, problems, 1, 525600) * 60_000,
     sessionAbsoluteMs: int(env, 'SESSION_ABSOLUTE_HOURS', 7 * 24, problems, 1, 87600) * 3_600_000,
+    sessionCleanupMs: int(env, 'SESSION_CLEANUP_MINUTES', nodeEnv === 'test' ? 0 : 15, problems, 0, 10_080) * 60_000,
     smtp: { host: env.SMTP_HOST || '127.0.0.1', port: int(env, 'SMTP_PORT', 2525, problems) },
     mailFrom: env.MAIL_FROM || 'Lagline <no-reply@lagline.test>',
     appUrl: appUrl.replace(/\/+$/, ''),
@@ -121,6 +139,8 @@ export function loadConfig(env: Env = process.env): Config {
     uploadDir: env.UPLOAD_DIR || path.join(ROOT, '.uploads', nodeEnv),
     rateLimits: {
       signin: { windowMs: 15 * 60_000, limit: int(env, 'RATE_LIMIT_SIGNIN', 10, problems, 1, 1_000_000) },
+      signup: { windowMs: 60 * 60_000, limit: int(env, 'RATE_LIMIT_SIGNUP', 5, problems, 1, 1_000_000) },
+      signupAttempts: { windowMs: 60 * 60_000, limit: int(env, 'RATE_LIMIT_SIGNUP_ATTEMPTS', 30, problems, 1, 1_000_000) },
       passwordReset: { windowMs: 60 * 60_000, limit: int(env, 'RATE_LIMIT_RESET', 5, problems, 1, 1_000_000) },
       invite: { windowMs: 60 * 60_000, limit: int(env, 'RATE_LIMIT_INVITE', 30, problems, 1, 1_000_000) },
       calculations: { windowMs: 60_000, limit: int(env, 'RATE_LIMIT_CALCULATIONS', 120, problems, 1, 1_000_000) },

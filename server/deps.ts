@@ -7,4 +7,15 @@ import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 
 /** What route modules receive from createApp. */
-export type Deps = { db: Db; mailer: Mailer; config: Config; logger: Logger; limiters: Limiters; calc: CalcPool; jobs: JobRunner };
+export type Deps = {
+  db: Db;
+  mailer: Mailer;
+  config: Config;
+  logger: Logger;
+  limiters: Limiters;
+  calc: CalcPool;
+  /** Background jobs kept in MariaDB (site sizing, imports…). */
+  jobs: JobRunner;
+  /** APP_URL is https: cookies are marked Secure on every answer. */
+  secureCookies: boolean;
+};

@@ -31,21 +31,39 @@ export const errors = {
   unavailable: (code: string, message: string) => new AppError(503, code, message),
 };
 
+/** Errors that mean the database is unreachable, gone away mid-query or too slow: worth a retry. */
 const DB_DOWN_CODES = new Set([
   'ECONNREFUSED',
   'ECONNRESET',
+  'ECONNABORTED',
+  'EPIPE',
   'ETIMEDOUT',
   'EHOSTUNREACH',
+  'ENETUNREACH',
+  'ENOTFOUND',
+  'EAI_AGAIN',
   'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_SEQUENCE_TIMEOUT',
+  'DB_QUERY_TIMEOUT',
   'ER_ACCESS_DENIED_ERROR',
   'ER_BAD_DB_ERROR',
   'ER_CON_COUNT_ERROR',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
+  'ER_QUERY_INTERRUPTED',
+  'ER_LOCK_WAIT_TIMEOUT',
+  'ER_LOCK_DEADLOCK',
+  'ER_CLIENT_INTERACTION_TIMEOUT',
 ]);
 
-function isDatabaseDown(err: unknown): boolean {
-  const e = err as { code?: string; name?: string } | null;
-  return !!e && (DB_DOWN_CODES.has(e.code ?? '') || e.name === 'KnexTimeoutError');
+export function isDatabaseDown(err: unknown): boolean {
+  const e = err as { code?: string; name?: string; fatal?: boolean } | null;
+  if (!e || typeof e !== 'object') return false;
+  // mysql2 flags errors that ended the connection (a lost socket, a closed connection) as fatal.
+  return DB_DOWN_CODES.has(e.code ?? '') || e.name === 'KnexTimeoutError' || e.fatal === true;
 }
+
+export const serviceUnavailable = () => errors.unavailable('SERVICE_UNAVAILABLE', 'The service is temporarily unavailable; try again shortly.');
 
 /** Body-parser errors carry `type`; map them to our codes. */
 function fromParserError(err: { type?: string; status?: number }): AppError | null {
@@ -72,12 +90,17 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     let appErr: AppError | null = err instanceof AppError ? err : fromParserError(err ?? {});
     if (!appErr && isDatabaseDown(err)) {
-      appErr = errors.unavailable('SERVICE_UNAVAILABLE', 'The service is temporarily unavailable; try again shortly.');
+      appErr = serviceUnavailable();
       logger.error(`[${req.id}] database unavailable: ${(err as Error).message}`);
     }
     if (!appErr) {
       logger.error(`[${req.id}] unexpected error on ${req.method} ${req.originalUrl}:`, err);
       appErr = new AppError(500, 'INTERNAL', 'An unexpected error occurred.');
+    }
+    if (appErr.status >= 500) {
+      // Nothing of a failed request is saved, touched or destroyed in the session store: the stored
+      // session stays as it was, and the answer does not wait on a database that may be down.
+      (req as { session?: unknown }).session = undefined;
     }
     if (res.headersSent) {
       res.end();

@@ -64,8 +64,7 @@ async function main(): Promise<void> {
     logger.info(`${signal}: shutting down`);
     (setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout).unref();
     server.close(async () => {
-      await app.locals.jobs.stop().catch(() => undefined);
-      await app.locals.calc.close().catch(() => undefined);
+      await app.locals.close().catch(() => undefined);
       await catcher?.close().catch(() => undefined);
       mailer.close();
       await db.destroy().catch(() => undefined);

@@ -1,7 +1,7 @@
 import type { Router } from 'express';
 import { passwordResetConfirmSchema, passwordResetRequestSchema, signInSchema, signUpSchema } from '../../shared/schemas/auth';
 import type { Deps } from '../deps';
-import { ensureCsrfToken } from '../http/csrf';
+import { issueCsrfToken } from '../http/csrf';
 import { publicRoute, route } from '../http/routes';
 import { SESSION_COOKIE, endSession, signInWithPayload } from '../http/session';
 import { validateBody } from '../http/validate';
@@ -9,11 +9,14 @@ import * as auth from './auth.service';
 
 export function registerAuthRoutes(router: Router, deps: Deps): void {
   route(router, 'get', '/api/v1/auth/session', publicRoute(), async (req, res) => {
-    const token = ensureCsrfToken(req);
-    res.set('Cache-Control', 'no-store').json(await auth.sessionPayload(deps, req.auth, token));
+    // A visitor's token lives in a signed cookie: looking at the sign-in form stores nothing.
+    const token = issueCsrfToken(req, res, { secret: deps.config.sessionSecret, secureCookies: deps.secureCookies });
+    res.json(await auth.sessionPayload(deps, req.auth, token));
   });
 
-  route(router, 'post', '/api/v1/auth/signup', publicRoute(), deps.limiters.signin, validateBody(signUpSchema), async (req, res) => {
+  // Sign-up has limits of its own: refused sign-ups never count against sign-in, and successful ones
+  // (each a new team) are limited per client.
+  route(router, 'post', '/api/v1/auth/signup', publicRoute(), deps.limiters.signupAttempts, deps.limiters.signup, validateBody(signUpSchema), async (req, res) => {
     const { userId, teamId } = await auth.signUp(deps, req.body, req.ip);
     res.status(201).json(await signInWithPayload(deps, req, userId, teamId));
   });
@@ -25,7 +28,7 @@ export function registerAuthRoutes(router: Router, deps: Deps): void {
 
   route(router, 'post', '/api/v1/auth/signout', publicRoute(), async (req, res) => {
     await endSession(req);
-    res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax' });
+    res.clearCookie(SESSION_COOKIE, { path: '/', httpOnly: true, sameSite: 'lax', secure: deps.secureCookies || req.secure });
     res.status(204).end();
   });
 

@@ -8,7 +8,7 @@ import type { Logger } from '../logger';
 import type { Mailer } from '../mail/mailer';
 import { passwordResetMail } from '../mail/templates';
 import { findSettings } from '../me/settings.repository';
-import { findMember, findTeam, firstMembershipOfUser, insertMembership, insertTeam } from '../team/teams.repository';
+import { findMember, findTeam, firstMembershipOfUser, insertMembership, insertTeam, listTeamNamesOfUser } from '../team/teams.repository';
 import { assertStrongPassword, dummyHash, hashPassword, hashToken, newToken, verifyPassword } from './passwords';
 import { findPasswordResetUserId, findUsablePasswordReset, insertPasswordReset, markPasswordResetsUsed } from './password-resets.repository';
 import { deleteSessionsOfUser } from './sessions.repository';
@@ -100,7 +100,7 @@ export async function confirmPasswordReset(deps: { db: Db; config: Config }, tok
   const tokenHash = hashToken(token);
   const pendingUserId = await findPasswordResetUserId(deps.db, tokenHash);
   const user = pendingUserId ? await findUserById(deps.db, pendingUserId) : undefined;
-  if (user) assertStrongPassword(password, [user.email, user.name]);
+  if (user) assertStrongPassword(password, [user.email, user.name, ...(await listTeamNamesOfUser(deps.db, user.id))]);
   const passwordHash = await hashPassword(password, deps.config.bcryptCost);
   await inTransaction(deps.db, async (trx) => {
     const now = new Date();

@@ -1,12 +1,15 @@
 import { runCases } from '../../shared/calc';
 import { sizeItems } from '../../shared/calc/sizing/batch';
-import type { SizingContext, SizingTask } from '../../shared/calc/sizing/types';
+import type { CalcTask, CalcTaskResult } from './calc-tasks';
 
-export type SizeItemsTask = { kind: 'sizeItems'; ctx: SizingContext; tasks: SizingTask[] };
-
-/** Runs one task in a worker thread: an array is a chunk of calculation cases; `sizeItems` sizes site items. */
-export default function runTask(input: unknown[] | SizeItemsTask): unknown[] {
-  if (Array.isArray(input)) return runCases(input);
-  if (input && input.kind === 'sizeItems') return sizeItems(input.ctx, input.tasks);
-  throw new Error('Unknown worker task');
+/** Runs one task in a worker thread, by its kind. */
+export default function runTask(task: CalcTask): CalcTaskResult {
+  switch (task?.kind) {
+    case 'cases':
+      return runCases(task.cases);
+    case 'sizeItems':
+      return sizeItems(task.ctx, task.tasks);
+    default:
+      throw new Error(`Unknown calculation task kind "${String((task as { kind?: unknown } | null)?.kind)}"`);
+  }
 }

@@ -48,7 +48,7 @@ export async function createInvitation(
   });
   const link = `${deps.config.appUrl}/accept-invite?token=${encodeURIComponent(token)}`;
   deps.mailer
-    .send(invitationMail({ to: email, teamName: team?.name ?? 'your team', role, invitedBy: caller.name, link, expiresAt }))
+    .send(invitationMail({ to: email, teamId: caller.teamId, teamName: team?.name ?? 'your team', role, invitedBy: caller.name, link, expiresAt }))
     .catch((e) => deps.logger.error('invitation mail failed:', e));
   return { id, email, role, expiresAt: expiresAt.toISOString() };
 }

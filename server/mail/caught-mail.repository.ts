@@ -1,8 +1,28 @@
 import type { Db } from '../db/db';
 
-export type CaughtMail = { id: number; to: string; from: string; subject: string; text: string; html: string | null; receivedAt: string };
+export type CaughtMail = {
+  id: number;
+  to: string;
+  from: string;
+  subject: string;
+  text: string;
+  html: string | null;
+  receivedAt: string;
+  teamId: number | null;
+  kind: string | null;
+};
 
-type Row = { id: number; to_address: string; from_address: string; subject: string; text: string | null; html: string | null; received_at: Date };
+type Row = {
+  id: number;
+  to_address: string;
+  from_address: string;
+  subject: string;
+  text: string | null;
+  html: string | null;
+  received_at: Date;
+  team_id: number | null;
+  kind: string | null;
+};
 
 const toMail = (r: Row): CaughtMail => ({
   id: r.id,
@@ -12,11 +32,13 @@ const toMail = (r: Row): CaughtMail => ({
   text: r.text ?? '',
   html: r.html,
   receivedAt: new Date(r.received_at).toISOString(),
+  teamId: r.team_id,
+  kind: r.kind,
 });
 
 export async function insertCaughtMail(
   db: Db,
-  m: { messageId?: string; from: string; to: string; subject: string; text?: string; html?: string },
+  m: { messageId?: string; from: string; to: string; subject: string; text?: string; html?: string; teamId?: number | null; kind?: string | null },
 ): Promise<void> {
   await db('caught_mail').insert({
     message_id: m.messageId?.slice(0, 255) ?? null,
@@ -25,6 +47,8 @@ export async function insertCaughtMail(
     subject: m.subject.slice(0, 500),
     text: m.text ?? null,
     html: m.html ?? null,
+    team_id: m.teamId ?? null,
+    kind: m.kind?.slice(0, 32) ?? null,
   });
 }
 
@@ -34,16 +58,19 @@ export async function listCaughtMail(db: Db, opts: { to?: string; limit?: number
   return (await q).map(toMail);
 }
 
-/** Caught mail addressed to the team's members or invitees. */
-export async function listCaughtMailForTeam(db: Db, teamId: number, limit = 200): Promise<CaughtMail[]> {
-  const rows = await db<Row>('caught_mail')
-    .where((w) => {
-      w.whereIn('to_address', db('memberships as m').join('users as u', 'u.id', 'm.user_id').select('u.email').where('m.team_id', teamId)).orWhereIn(
-        'to_address',
-        db('invitations').select('email').where({ team_id: teamId }),
-      );
-    })
-    .orderBy('id', 'desc')
+/**
+ * Caught mail that the team's own actions sent, newest first. Password resets are never listed (they
+ * belong to no team), nor mail filed under an id the team got only later (ids restart after a reseed).
+ */
+export async function listCaughtMailSentByTeam(db: Db, teamId: number, limit = 200): Promise<CaughtMail[]> {
+  const rows = await db('caught_mail as c')
+    .join('teams as t', 't.id', 'c.team_id')
+    .select('c.*')
+    .where('c.team_id', teamId)
+    .whereNotNull('c.kind')
+    .whereNot('c.kind', 'password-reset')
+    .whereRaw('c.received_at >= t.created_at')
+    .orderBy('c.id', 'desc')
     .limit(limit);
-  return rows.map(toMail);
+  return (rows as Row[]).map(toMail);
 }

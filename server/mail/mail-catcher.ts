@@ -3,6 +3,7 @@ import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Db } from '../db/db';
 import { insertCaughtMail } from './caught-mail.repository';
+import { MAIL_KIND_HEADER, MAIL_TEAM_HEADER } from './mailer';
 
 export type MailCatcher = { port: number; close: () => Promise<void> };
 
@@ -12,9 +13,21 @@ const addresses = (a: AddressObject | AddressObject[] | undefined): string =>
     .filter(Boolean)
     .join(', ');
 
+const header = (headers: Map<string, unknown>, name: string): string | undefined => {
+  const v = headers.get(name.toLowerCase());
+  return typeof v === 'string' ? v.trim() : undefined;
+};
+
+/** The team a message was sent for, from the mailer's header; null when absent or not an id. */
+function teamOf(headers: Map<string, unknown>): number | null {
+  const raw = header(headers, MAIL_TEAM_HEADER);
+  return raw && /^[1-9][0-9]{0,9}$/.test(raw) && Number(raw) <= 2_147_483_647 ? Number(raw) : null;
+}
+
 /**
- * A local SMTP server on loopback that stores every message it receives in caught_mail,
- * so the app (GET /dev/mail) and tests can read it. Development and tests only.
+ * A local SMTP server on loopback that stores every message it receives in caught_mail, filed under
+ * the team and kind the mailer put in its headers, so the app (GET /dev/mail: a team's own mail only)
+ * and tests can read it. Development and tests only.
  */
 export async function startMailCatcher(db: Db, opts: { port?: number; host?: string; onError?: (e: unknown) => void } = {}): Promise<MailCatcher> {
   const server = new SMTPServer({
@@ -32,6 +45,8 @@ export async function startMailCatcher(db: Db, opts: { port?: number; host?: str
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : undefined,
+            teamId: teamOf(parsed.headers),
+            kind: header(parsed.headers, MAIL_KIND_HEADER) ?? null,
           });
           callback();
         })

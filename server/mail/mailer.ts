@@ -1,8 +1,22 @@
 import nodemailer from 'nodemailer';
 import type { Config } from '../config';
 
-export type OutgoingMail = { to: string; subject: string; text: string };
+/** What a message is about; the in-app view of caught mail never shows a password reset. */
+export type MailKind = 'invitation' | 'password-reset';
+
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  kind: MailKind;
+  /** The team whose action sent it (an owner inviting someone); null when no team acted (a reset). */
+  teamId: number | null;
+};
 export type Mailer = { send: (mail: OutgoingMail) => Promise<void>; close: () => void };
+
+/** Headers that carry kind and team to the local catcher, which files the message under them. */
+export const MAIL_KIND_HEADER = 'X-Lagline-Mail-Kind';
+export const MAIL_TEAM_HEADER = 'X-Lagline-Team';
 
 /** SMTP mailer; in development and tests it talks to the local catcher. */
 export function createMailer(config: Pick<Config, 'smtp' | 'mailFrom'>): Mailer {
@@ -15,7 +29,9 @@ export function createMailer(config: Pick<Config, 'smtp' | 'mailFrom'>): Mailer 
   });
   return {
     send: async (mail) => {
-      await transport.sendMail({ from: config.mailFrom, to: mail.to, subject: mail.subject, text: mail.text });
+      const headers: Record<string, string> = { [MAIL_KIND_HEADER]: mail.kind };
+      if (mail.teamId !== null) headers[MAIL_TEAM_HEADER] = String(mail.teamId);
+      await transport.sendMail({ from: config.mailFrom, to: mail.to, subject: mail.subject, text: mail.text, headers });
     },
     close: () => transport.close(),
   };

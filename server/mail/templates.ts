@@ -9,9 +9,19 @@ const ROLE_NAMES: Record<Role, string> = {
   viewer: 'viewer',
 };
 
-export function invitationMail(p: { to: string; teamName: string; role: Role; invitedBy: string; link: string; expiresAt: Date }): OutgoingMail {
+export function invitationMail(p: {
+  to: string;
+  teamId: number;
+  teamName: string;
+  role: Role;
+  invitedBy: string;
+  link: string;
+  expiresAt: Date;
+}): OutgoingMail {
   return {
     to: p.to,
+    kind: 'invitation',
+    teamId: p.teamId,
     subject: `You are invited to ${p.teamName} on Lagline`,
     text: [
       `${p.invitedBy} invited you to join the team "${p.teamName}" on Lagline as ${ROLE_NAMES[p.role]}.`,
@@ -28,6 +38,8 @@ export function invitationMail(p: { to: string; teamName: string; role: Role; in
 export function passwordResetMail(p: { to: string; link: string }): OutgoingMail {
   return {
     to: p.to,
+    kind: 'password-reset',
+    teamId: null,
     subject: 'Reset your Lagline password',
     text: [
       'Someone (hopefully you) asked to reset the password of your Lagline account.',

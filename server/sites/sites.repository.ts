@@ -34,8 +34,10 @@ export async function listSites(db: Db, teamId: number, onlyForUserId?: number):
   return (await visibleSites(db, teamId, onlyForUserId).orderBy('name')).map(toSite);
 }
 
-export async function findSite(db: Db, teamId: number, id: number, onlyForUserId?: number): Promise<Site | undefined> {
-  const row = await visibleSites(db, teamId, onlyForUserId).where({ id }).first();
+export async function findSite(db: Db, teamId: number, id: number, onlyForUserId?: number, opts: { lock?: boolean } = {}): Promise<Site | undefined> {
+  const q = visibleSites(db, teamId, onlyForUserId).where({ id }).first();
+  // Locked inside an edit, so two concurrent edits diff against what the other wrote.
+  const row = await (opts.lock ? q.forUpdate() : q);
   return row ? toSite(row) : undefined;
 }
 

@@ -46,31 +46,69 @@ export async function createSite(deps: { db: Db }, caller: Caller, input: SiteCr
   });
 }
 
+type Change = { from: unknown; to: unknown };
+
+/** Leaf values of a design-bases object, keyed by their path ("designBases.touch.airTemperatureC"). */
+function leaves(value: unknown, prefix: string, out: Map<string, unknown> = new Map()): Map<string, unknown> {
+  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
+    for (const [k, v] of Object.entries(value)) leaves(v, `${prefix}.${k}`, out);
+  } else if (value !== undefined) {
+    out.set(prefix, value);
+  }
+  return out;
+}
+
+/** What an edit really changes, field by field (a basis given replaces that basis, so a dropped value is a change). */
+function siteChanges(site: repo.Site, next: { name: string; description: string; designBases: DesignBases }): Record<string, Change> {
+  const changes: Record<string, Change> = {};
+  if (next.name !== site.name) changes.name = { from: site.name, to: next.name };
+  if (next.description !== site.description) changes.description = { from: site.description, to: next.description };
+  const before = leaves(site.designBases, 'designBases');
+  const after = leaves(next.designBases, 'designBases');
+  for (const field of new Set([...before.keys(), ...after.keys()])) {
+    const from = before.get(field) ?? null;
+    const to = after.get(field) ?? null;
+    if (JSON.stringify(from) !== JSON.stringify(to)) changes[field] = { from, to };
+  }
+  return changes;
+}
+
 /**
- * Edits a site. A role with only 'site.editTouchBasis' (safety officers) may change the touch-safety
- * basis and nothing else.
+ * Edits a site. A role with only 'site.editTouchBasis' (safety officers) may send the touch-safety
+ * basis and nothing else. Only real changes are written and audited (the audit row lists them); an
+ * edit that changes nothing answers the site as it is.
  */
 export async function updateSite(deps: { db: Db }, caller: Caller, id: number, patch: SitePatchInput, ip?: string) {
   if (!can(caller.role, 'site.edit')) {
-    const onlyTouch =
-      patch.name === undefined &&
-      patch.description === undefined &&
-      patch.designBases !== undefined &&
-      Object.keys(patch.designBases).every((k) => k === 'touch');
-    if (!onlyTouch) throw errors.forbidden('Your role may change the touch-safety basis only.');
+    const outsideReach = [
+      ...(patch.name !== undefined ? ['name'] : []),
+      ...(patch.description !== undefined ? ['description'] : []),
+      ...Object.keys(patch.designBases ?? {})
+        .filter((k) => k !== 'touch')
+        .map((k) => `designBases.${k}`),
+    ];
+    if (outsideReach.length) throw errors.forbidden(`Your role may change the touch-safety basis only (not ${outsideReach.join(', ')}).`);
   }
   return inTransaction(deps.db, async (trx) => {
-    const site = await repo.findSite(trx, caller.teamId, id, visibleTo(caller));
+    const site = await repo.findSite(trx, caller.teamId, id, visibleTo(caller), { lock: true });
     if (!site) throw errors.notFound('The site');
-    if (patch.name !== undefined) await assertNameFree(trx, caller.teamId, patch.name, id);
+    const next = {
+      name: patch.name ?? site.name,
+      description: patch.description ?? site.description,
+      designBases: patch.designBases ? { ...site.designBases, ...patch.designBases } : site.designBases,
+    };
+    const changes = siteChanges(site, next);
+    const changed = Object.keys(changes);
+    if (!changed.length) return site;
+    if (changes.name) await assertNameFree(trx, caller.teamId, next.name, id);
     await repo.updateSite(trx, caller.teamId, id, {
-      name: patch.name,
-      description: patch.description,
-      designBases: patch.designBases ? { ...site.designBases, ...patch.designBases } : undefined,
+      name: changes.name ? next.name : undefined,
+      description: changes.description ? next.description : undefined,
+      designBases: changed.some((f) => f.startsWith('designBases.')) ? next.designBases : undefined,
     });
     // Bases feed every item's sizing: the items whose numbers change read as stale now.
-    if (patch.designBases) await refreshSiteInputHashes(trx, caller.teamId, id);
-    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.updated', targetType: 'site', targetId: id, details: { fields: Object.keys(patch) }, ip });
+    if (changed.some((f) => f.startsWith('designBases.'))) await refreshSiteInputHashes(trx, caller.teamId, id);
+    await insertAudit(trx, { teamId: caller.teamId, userId: caller.userId, action: 'site.updated', targetType: 'site', targetId: id, details: { changed, changes }, ip });
     return (await repo.findSite(trx, caller.teamId, id))!;
   });
 }

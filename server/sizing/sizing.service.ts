@@ -1,4 +1,6 @@
 import { annualCo2, energyCost, fuelEnergyKWh } from '../../shared/calc/energy';
+import type { SizedItem } from '../../shared/calc/sizing/batch';
+import type { SizingContext, SizingTask } from '../../shared/calc/sizing/types';
 import type { SizingSettingsInput } from '../../shared/schemas/lines';
 import { insertAudit } from '../audit/audit.repository';
 import type { Caller } from '../auth/auth.service';
@@ -17,6 +19,16 @@ export const SITE_SIZING = 'siteSizing';
 
 /** Items read, sized and stored per step of the job (one transaction each). */
 const STEP_ITEMS = 500;
+/** Items per worker task. */
+const CHUNK_ITEMS = 50;
+
+/** Sizes items in the pool's batch lane, in chunks that take turns with other batch work; results in order. */
+async function sizeInPool(calc: CalcPool, ctx: SizingContext, tasks: SizingTask[], owner: string): Promise<SizedItem[]> {
+  const chunks: SizingTask[][] = [];
+  for (let i = 0; i < tasks.length; i += CHUNK_ITEMS) chunks.push(tasks.slice(i, i + CHUNK_ITEMS));
+  const parts = await Promise.all(chunks.map((c) => calc.submit({ kind: 'sizeItems', ctx, tasks: c }, { lane: 'batch', owner })));
+  return parts.flat();
+}
 
 async function siteOrNotFound(db: Db, caller: Caller, siteId: number) {
   const site = await findSite(db, caller.teamId, siteId, visibleTo(caller));
@@ -70,7 +82,7 @@ export function siteSizingHandler(deps: { db: Db; calc: CalcPool }) {
     for (;;) {
       const items = await listSiteItems(deps.db, siteId, { afterId: cursor, limit: STEP_ITEMS });
       if (items.length === 0) return;
-      const sized = await deps.calc.runSizing(ctx, items.map(taskOf));
+      const sized = await sizeInPool(deps.calc, ctx, items.map(taskOf), `site:${siteId}`);
       const sizedAt = new Date();
       cursor = items[items.length - 1].id;
       await deps.db.transaction(async (trx) => {

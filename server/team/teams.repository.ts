@@ -29,6 +29,12 @@ export async function firstMembershipOfUser(db: Db, userId: number): Promise<{ t
   return db('memberships').select('team_id', 'role').where({ user_id: userId }).orderBy('id').first();
 }
 
+/** Names of every team the user belongs to (their password must not lean on them). */
+export async function listTeamNamesOfUser(db: Db, userId: number): Promise<string[]> {
+  const rows = await db('memberships as m').join('teams as t', 't.id', 'm.team_id').select('t.name').where('m.user_id', userId);
+  return rows.map((r: { name: string }) => r.name);
+}
+
 export async function listMembers(db: Db, teamId: number): Promise<MemberRow[]> {
   return db('memberships as m')
     .join('users as u', 'u.id', 'm.user_id')

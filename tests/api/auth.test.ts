@@ -1,6 +1,8 @@
 import request from 'supertest';
 import { isPastAbsoluteTimeout } from '../../server/auth/auth.service';
 import { loadConfig } from '../../server/config';
+import demo from '../../seeds/demo-credentials.json';
+import type { LaglineApp } from '../../server/app';
 import { type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 
 jest.setTimeout(60_000);
@@ -13,8 +15,32 @@ afterAll(async () => {
   await ctx.close();
 });
 
-const sidCookie = (res: request.Response): string | undefined =>
-  ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('lagline.sid='))?.split(';')[0];
+const cookieNamed = (res: request.Response, name: string): string | undefined =>
+  ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${name}=`));
+const sidCookie = (res: request.Response): string | undefined => cookieNamed(res, 'lagline.sid')?.split(';')[0];
+
+type Jar = { jar: { getCookie: (n: string, o: unknown) => { value: string } | undefined } };
+/** The session cookie a supertest agent holds, as a Cookie header value. */
+const agentSid = (agent: unknown) =>
+  `lagline.sid=${(agent as Jar).jar.getCookie('lagline.sid', { domain: '127.0.0.1', path: '/', secure: false, script: false })!.value}`;
+
+/**
+ * Visits the sign-in form and signs in with raw cookie headers (a supertest agent keeps no Secure
+ * cookie over plain HTTP), returning both Set-Cookie lines as sent.
+ */
+async function signInByHand(app: Parameters<typeof request>[0], email: string, headers: Record<string, string> = {}) {
+  const visit = await request(app).get('/api/v1/auth/session').set(headers).expect(200);
+  const visitor = cookieNamed(visit, 'lagline.csrf')!;
+  expect(visitor).toBeDefined();
+  const signin = await request(app)
+    .post('/api/v1/auth/signin')
+    .set(headers)
+    .set('Cookie', visitor.split(';')[0])
+    .set('X-CSRF-Token', visit.body.csrfToken)
+    .send({ email, password: STRONG_PASSWORD });
+  const session = cookieNamed(signin, 'lagline.sid')!;
+  return { visitor, session, signedIn: signin.status === 200 && !!session, csrf: signin.body.csrfToken as string };
+}
 
 describe('sign-up', () => {
   it('when a visitor signs up, then the team, the owner membership and a signed-in session exist', async () => {
@@ -113,22 +139,24 @@ describe('sign-in', () => {
     expect(res.body.user.email).toBe(email);
   });
 
-  it('when a visitor signs in, then the session id changes and the pre-sign-in id is not signed in (no fixation)', async () => {
+  it('when someone signs in on a planted session id, then the session id changes and the planted id is not signed in (no fixation)', async () => {
     const { email } = await signUpOwner(ctx);
-    const first = await request(ctx.app).get('/api/v1/auth/session').expect(200);
-    const before = sidCookie(first)!;
-    expect(before).toBeDefined();
+    // An attacker's own signed-in session id, planted in the victim's browser.
+    const attacker = await signUpOwner(ctx);
+    const planted = agentSid(attacker.agent);
+    const first = await request(ctx.app).get('/api/v1/auth/session').set('Cookie', planted).expect(200);
+    expect(first.body.user.email).toBe(attacker.email);
     const signin = await request(ctx.app)
       .post('/api/v1/auth/signin')
-      .set('Cookie', before)
+      .set('Cookie', planted)
       .set('X-CSRF-Token', first.body.csrfToken)
       .send({ email, password: STRONG_PASSWORD })
       .expect(200);
     const after = sidCookie(signin)!;
     expect(after).toBeDefined();
-    expect(after).not.toBe(before);
+    expect(after).not.toBe(planted);
     expect(signin.body.csrfToken).not.toBe(first.body.csrfToken);
-    const withOld = await request(ctx.app).get('/api/v1/auth/session').set('Cookie', before).expect(200);
+    const withOld = await request(ctx.app).get('/api/v1/auth/session').set('Cookie', planted).expect(200);
     expect(withOld.body.user).toBeNull();
     const withNew = await request(ctx.app).get('/api/v1/auth/session').set('Cookie', after).expect(200);
     expect(withNew.body.user.email).toBe(email);
@@ -149,19 +177,47 @@ describe('sign-in', () => {
     expect(again.body.user.email).toBe(email);
   });
 
-  it('when the session cookie is set, then it is httpOnly, SameSite=Lax and named lagline.sid', async () => {
-    const res = await request(ctx.app).get('/api/v1/auth/session').expect(200);
-    const raw = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('lagline.sid='))!;
-    expect(raw).toMatch(/HttpOnly/i);
-    expect(raw).toMatch(/SameSite=Lax/i);
-    expect(raw).not.toMatch(/Secure/i);
+  it('when the session and visitor cookies are set over plain HTTP, then they are httpOnly, SameSite=Lax and not Secure', async () => {
+    const { email } = await signUpOwner(ctx);
+    const { visitor, session } = await signInByHand(ctx.app, email);
+    for (const raw of [visitor, session]) {
+      expect(raw).toMatch(/HttpOnly/i);
+      expect(raw).toMatch(/SameSite=Lax/i);
+      expect(raw).not.toMatch(/Secure/i);
+    }
+    expect(session).toMatch(/^lagline\.sid=/);
   });
 
-  it('when the request arrives over HTTPS through a trusted proxy, then the cookie is Secure', async () => {
+  it('when the request arrives over HTTPS through a trusted proxy, then the cookies are Secure', async () => {
+    const { email } = await signUpOwner(ctx);
     const app = ctx.restart({ trustProxy: 1 });
-    const res = await request(app).get('/api/v1/auth/session').set('X-Forwarded-Proto', 'https').expect(200);
-    const raw = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('lagline.sid='))!;
-    expect(raw).toMatch(/Secure/i);
+    const { visitor, session } = await signInByHand(app, email, { 'X-Forwarded-Proto': 'https' });
+    expect(visitor).toMatch(/;\s*Secure/i);
+    expect(session).toMatch(/;\s*Secure/i);
+  });
+
+  it('when APP_URL is https, then the cookies are Secure whether or not a proxy is trusted or says how it was reached', async () => {
+    const { email } = await signUpOwner(ctx);
+    const variants: [Partial<typeof ctx.config>, Record<string, string>][] = [
+      [{ appUrl: 'https://lagline.example', trustProxy: false }, {}],
+      [{ appUrl: 'https://lagline.example', trustProxy: 1 }, {}],
+      [{ appUrl: 'https://lagline.example', trustProxy: 1 }, { 'X-Forwarded-Proto': 'http' }],
+    ];
+    for (const [config, headers] of variants) {
+      const app = ctx.restart(config);
+      const { visitor, session, signedIn, csrf } = await signInByHand(app, email, headers);
+      expect(signedIn).toBe(true);
+      expect(visitor).toMatch(/;\s*Secure/i);
+      expect(session).toMatch(/;\s*Secure/i);
+      // Signing out clears the cookie with the same attributes.
+      const out = await request(app)
+        .post('/api/v1/auth/signout')
+        .set(headers)
+        .set('Cookie', session.split(';')[0])
+        .set('X-CSRF-Token', csrf)
+        .expect(204);
+      expect(cookieNamed(out, 'lagline.sid')).toMatch(/;\s*Secure/i);
+    }
   });
 
   it('when sign-in fails repeatedly from one address, then it answers 429 RATE_LIMITED in the error shape', async () => {
@@ -262,5 +318,194 @@ describe('settings', () => {
     expect((await agent.get('/api/v1/auth/session')).body.settings).toEqual({ unitSystem: 'US' });
     const bad = await agent.patch('/api/v1/me/settings').set('X-CSRF-Token', agent.csrf).send({ unitSystem: 'imperial' }).expect(400);
     expect(bad.body.errors[0].field).toBe('unitSystem');
+  });
+});
+
+describe('sign-up limits', () => {
+  const signUp = async (app: LaglineApp, email: string, password = STRONG_PASSWORD) => {
+    const visitor = await ctx.agent(app);
+    return visitor.post('/api/v1/auth/signup').set('X-CSRF-Token', visitor.csrf).send({ name: 'Flood', email, password, teamName: 'Flood team' });
+  };
+
+  it('when one client signs up again and again, then successful sign-ups are limited and answer 429 in the error shape', async () => {
+    const app = ctx.restart({ rateLimits: { ...ctx.config.rateLimits, signup: { windowMs: 60_000, limit: 2 } } });
+    const statuses = [];
+    for (let i = 0; i < 4; i++) statuses.push((await signUp(app, uniqueEmail('flood'))).status);
+    expect(statuses).toEqual([201, 201, 429, 429]);
+    const last = await signUp(app, uniqueEmail('flood'));
+    expect(last.body).toEqual({ errors: [{ code: 'RATE_LIMITED', message: expect.any(String) }] });
+  });
+
+  it('when sign-ups are refused many times, then they do not count as successes and sign-in from the same client is not locked', async () => {
+    const { email } = await signUpOwner(ctx);
+    const app = ctx.restart({
+      rateLimits: { ...ctx.config.rateLimits, signin: { windowMs: 60_000, limit: 3 }, signup: { windowMs: 60_000, limit: 2 } },
+    });
+    for (let i = 0; i < 6; i++) {
+      expect((await signUp(app, email)).status).toBe(409);
+      expect((await signUp(app, uniqueEmail('weak'), 'password1234')).status).toBe(400);
+    }
+    const agent = await ctx.agent(app);
+    await agent.post('/api/v1/auth/signin').set('X-CSRF-Token', agent.csrf).send({ email, password: STRONG_PASSWORD }).expect(200);
+    // The refusals did not use up the successes either.
+    expect((await signUp(app, uniqueEmail('fresh'))).status).toBe(201);
+  });
+
+  it('when a client keeps trying to sign up with refused details, then its attempts are limited too, apart from sign-in', async () => {
+    const { email } = await signUpOwner(ctx);
+    const app = ctx.restart({ rateLimits: { ...ctx.config.rateLimits, signupAttempts: { windowMs: 60_000, limit: 3 } } });
+    const statuses = [];
+    for (let i = 0; i < 5; i++) statuses.push((await signUp(app, email)).status);
+    expect(statuses).toEqual([409, 409, 409, 429, 429]);
+    const agent = await ctx.agent(app);
+    await agent.post('/api/v1/auth/signin').set('X-CSRF-Token', agent.csrf).send({ email, password: STRONG_PASSWORD }).expect(200);
+  });
+});
+
+describe('visitors', () => {
+  const sessionCount = async () => Number((await ctx.db('sessions').count({ n: '*' }))[0].n);
+
+  it('when visitors without a cookie look around, then no session row is stored, yet their token lets them sign in', async () => {
+    const { email } = await signUpOwner(ctx);
+    const before = await sessionCount();
+    for (let i = 0; i < 5; i++) {
+      const visit = await request(ctx.app).get('/api/v1/auth/session').expect(200);
+      expect(visit.body).toMatchObject({ user: null, csrfToken: expect.any(String) });
+      expect(sidCookie(visit)).toBeUndefined();
+    }
+    await request(ctx.app).get('/api/v1/health').expect(200);
+    await request(ctx.app).get('/api/v1/sites').expect(401);
+    const visitor = await ctx.agent();
+    await visitor.get('/api/v1/auth/session').expect(200);
+    await visitor.post('/api/v1/auth/password-reset').set('X-CSRF-Token', visitor.csrf).send({ email: uniqueEmail('nobody') }).expect(202);
+    expect(await sessionCount()).toBe(before);
+
+    await visitor.post('/api/v1/auth/signin').set('X-CSRF-Token', visitor.csrf).send({ email, password: STRONG_PASSWORD }).expect(200);
+    expect(await sessionCount()).toBe(before + 1);
+  });
+
+  it('when the visitor token does not match its signed cookie, then state-changing requests are refused', async () => {
+    const { email } = await signUpOwner(ctx);
+    const visit = await request(ctx.app).get('/api/v1/auth/session').expect(200);
+    const cookie = cookieNamed(visit, 'lagline.csrf')!.split(';')[0];
+    const token = visit.body.csrfToken as string;
+    const signIn = (cookieHeader: string | undefined, sent: string) => {
+      const r = request(ctx.app).post('/api/v1/auth/signin');
+      if (cookieHeader) r.set('Cookie', cookieHeader);
+      return r.set('X-CSRF-Token', sent).send({ email, password: STRONG_PASSWORD });
+    };
+    // No cookie, someone else's token, a cookie whose signature was made up.
+    expect((await signIn(undefined, token)).body.errors[0].code).toBe('CSRF_FAILED');
+    const other = await request(ctx.app).get('/api/v1/auth/session');
+    expect((await signIn(cookie, other.body.csrfToken)).status).toBe(403);
+    expect((await signIn(`lagline.csrf=${token}.${'A'.repeat(43)}`, token)).status).toBe(403);
+    expect((await signIn(cookie, token)).status).toBe(200);
+  });
+
+  it('when a visitor signs in, then the visitor token no longer works: the session has its own', async () => {
+    const { email } = await signUpOwner(ctx);
+    const agent = await ctx.agent();
+    const visitorToken = agent.csrf;
+    const res = await agent.post('/api/v1/auth/signin').set('X-CSRF-Token', visitorToken).send({ email, password: STRONG_PASSWORD }).expect(200);
+    expect(res.body.csrfToken).not.toBe(visitorToken);
+    const refused = await agent.post('/api/v1/sites').set('X-CSRF-Token', visitorToken).send({ name: 'With the old token' });
+    expect(refused.status).toBe(403);
+    expect(refused.body.errors[0].code).toBe('CSRF_FAILED');
+    await agent.post('/api/v1/sites').set('X-CSRF-Token', res.body.csrfToken).send({ name: 'With the session token' }).expect(201);
+  });
+
+  it('when session rows have expired, then the expiry sweep deletes them and keeps live ones', async () => {
+    const { userId } = await signUpOwner(ctx);
+    const live = await ctx.db('sessions').whereRaw("JSON_VALUE(sess, '$.userId') = ?", [String(userId)]);
+    expect(live).toHaveLength(1);
+    const sid = `expired-${Date.now()}`;
+    await ctx.db('sessions').insert({ sid, sess: JSON.stringify({ cookie: {}, userId }), expired: new Date(Date.now() - 60_000) });
+    const app = ctx.restart({ sessionCleanupMs: 100 });
+    try {
+      const deadline = Date.now() + 10_000;
+      while ((await ctx.db('sessions').where({ sid })).length && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
+      expect(await ctx.db('sessions').where({ sid })).toHaveLength(0);
+      expect(await ctx.db('sessions').where({ sid: live[0].sid })).toHaveLength(1);
+    } finally {
+      await app.locals.close();
+    }
+  });
+});
+
+describe('strength of passwords', () => {
+  const attempt = async (password: string, who: { name?: string; email?: string; teamName?: string } = {}) => {
+    const agent = await ctx.agent();
+    return agent
+      .post('/api/v1/auth/signup')
+      .set('X-CSRF-Token', agent.csrf)
+      .send({ name: who.name ?? 'Pat Ferris', email: who.email ?? uniqueEmail(), password, teamName: who.teamName ?? 'Fernside Plant' });
+  };
+
+  it('when a password is a season and year, the product name with digits, or the user\'s own name plus a word, then 400 WEAK_PASSWORD', async () => {
+    const weak = [
+      'Summer2024!!',
+      'lagline12345',
+      'Lagline2024!',
+      'Lagline-pipework',
+      'PatFerris-kitchen',
+      'pat ferris window',
+      'ferris-kitchen-1',
+      'Fernside-Plant-99',
+      'Password1234567890!!',
+    ];
+    const accepted: string[] = [];
+    for (const password of weak) {
+      const res = await attempt(password);
+      if (res.status !== 400 || res.body.errors[0].code !== 'WEAK_PASSWORD' || res.body.errors[0].field !== 'password') accepted.push(`${password} → ${res.status}`);
+    }
+    expect(accepted).toEqual([]);
+  });
+
+  it('when the same words belong to someone else, then they are an ordinary strong passphrase', async () => {
+    // "ferris kitchen" is weak for Pat Ferris, not for a user whose name it is not.
+    expect((await attempt('ferris-kitchen-71', { name: 'Quinn Abara', teamName: 'Northgate' })).status).toBe(201);
+    expect((await attempt('ferris-kitchen-71', { name: 'Pat Ferris' })).status).toBe(400);
+  });
+
+  it('when passwords are the demo password, the tests\' and long passphrases, then they pass', async () => {
+    for (const password of [demo.password, STRONG_PASSWORD, 'lantern-gravel-orchid-38', 'copper kettle drifts over seven quiet hills', 'correcthorsebatterystaplemoss']) {
+      const res = await attempt(password);
+      expect(`${password} → ${res.status}`).toBe(`${password} → 201`);
+    }
+  });
+
+  it('when a password reset sets a password built on the user\'s team name, then it is refused as well', async () => {
+    const { email } = await signUpOwner(ctx, { teamName: 'Quarrymoor Refinery' });
+    const visitor = await ctx.agent();
+    await visitor.post('/api/v1/auth/password-reset').set('X-CSRF-Token', visitor.csrf).send({ email }).expect(202);
+    const mail = await ctx.mail.waitFor(email, { subject: /reset/i });
+    const token = new URL(mail.text.match(/https?:\/\/\S+token=[A-Za-z0-9_-]+/)![0]).searchParams.get('token')!;
+    const res = await visitor
+      .post('/api/v1/auth/password-reset/confirm')
+      .set('X-CSRF-Token', visitor.csrf)
+      .send({ token, password: 'Quarrymoor-Refinery-2024' });
+    expect(res.status).toBe(400);
+    expect(res.body.errors[0]).toMatchObject({ code: 'WEAK_PASSWORD', field: 'password' });
+  });
+});
+
+describe('caching', () => {
+  it('when a signed-in user reads or writes, then every JSON answer says Cache-Control: no-store', async () => {
+    const { agent, userId } = await signUpOwner(ctx);
+    const site = await agent.post('/api/v1/sites').set('X-CSRF-Token', agent.csrf).send({ name: 'Cached?' }).expect(201);
+    const answers: [string, request.Response][] = [
+      ['GET /auth/session', await agent.get('/api/v1/auth/session')],
+      ['GET /sites', await agent.get('/api/v1/sites')],
+      ['GET /sites/:id', await agent.get(`/api/v1/sites/${site.body.site.id}`)],
+      ['GET /team', await agent.get('/api/v1/team')],
+      ['GET /me/settings', await agent.get('/api/v1/me/settings')],
+      ['PATCH /me/settings', await agent.patch('/api/v1/me/settings').set('X-CSRF-Token', agent.csrf).send({ unitSystem: 'US' })],
+      ['PATCH /team/members/:id', await agent.patch(`/api/v1/team/members/${userId}`).set('X-CSRF-Token', agent.csrf).send({ role: 'owner' })],
+      ['POST /sites', site],
+    ];
+    for (const [name, res] of answers) {
+      expect(res.headers['content-type']).toMatch(/application\/json/);
+      expect(`${name}: ${res.headers['cache-control']}`).toBe(`${name}: no-store`);
+    }
   });
 });

@@ -99,6 +99,52 @@ describe('POST /api/v1/calculations', () => {
     expect(done.body[0].surfaceTemperatureC).toBeDefined();
   }, 120_000);
 
+  it('when JSON nests too deep, then 400 TOO_DEEP names where, for a single case, a batch and any other route', async () => {
+    const deep = (n: number) => '['.repeat(n) + ']'.repeat(n);
+    const single = await post(`{"geometry":${deep(5000)}}`);
+    expect(single.status).toBe(400);
+    const singleBody = await single.json();
+    expect(singleBody.errors[0]).toMatchObject({ code: 'TOO_DEEP', field: expect.stringMatching(/^geometry\[0\]\[0\]/) });
+    expect(singleBody.errors[0].message).toMatch(/deeper than 32 levels/);
+    const batch = await post(`[${JSON.stringify(CASE)},{"layers":${deep(100_000)}}]`);
+    expect(batch.status).toBe(400);
+    expect((await batch.json()).errors[0]).toMatchObject({ code: 'TOO_DEEP', field: expect.stringMatching(/^\[1\]\.layers\[0\]/) });
+    const site = await fetch(`${server.url}/api/v1/auth/signin`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: `{"email":${deep(1000)}}`,
+    });
+    expect(site.status).toBe(400);
+    expect((await site.json()).errors[0].code).toBe('TOO_DEEP');
+    // A real batch nests five levels and is untouched.
+    expect((await post([CASE])).status).toBe(200);
+  });
+
+  it('when a 10,000-case batch is in flight, then a single case does not queue behind it and is answered first', async () => {
+    const cases = Array.from({ length: 10_000 }, (_, i) => ({ ...CASE, processTemperatureC: 100 + (i % 300) }));
+    const calc = server.app.locals.calc;
+    let batchAnsweredAt: number | null = null;
+    const batch = post(cases).then(async (r) => {
+      const body = await r.json();
+      batchAnsweredAt = performance.now();
+      return { status: r.status, body };
+    });
+    while (calc.pending() === 0 && batchAnsweredAt === null) await new Promise((r) => setTimeout(r, 5));
+    const chunksOfBatch = calc.pending();
+    const single = await post(CASE);
+    const singleAnsweredAt = performance.now();
+    const leftOfBatch = calc.pending();
+    expect(single.status).toBe(200);
+    expect((await single.json()).roundedLayersM).toEqual([0.06]);
+    // Answered while the batch still had most of its chunks to run: it did not wait for them.
+    expect(batchAnsweredAt).toBeNull();
+    expect(leftOfBatch).toBeGreaterThan(chunksOfBatch / 4);
+    const done = await batch;
+    expect(done.status).toBe(200);
+    expect(done.body).toHaveLength(10_000);
+    expect(batchAnsweredAt!).toBeGreaterThan(singleAnsweredAt);
+  }, 120_000);
+
   it('when the worker queue is full, then 503 BUSY in the error shape', async () => {
     const calc = createCalcPool({ calc: { maxThreads: 1, maxQueue: 2, chunkSize: 10 } });
     const app = createApp({ db: server.db, mailer: { send: async () => undefined, close: () => undefined }, config: server.config, calc });
@@ -135,7 +181,7 @@ describe('health', () => {
       expect(session.status).toBe(503);
       expect(session.body.errors[0].code).toBe('SERVICE_UNAVAILABLE');
     } finally {
-      await app.locals.calc.close();
+      await app.locals.close();
       await dead.destroy();
     }
   });

@@ -145,6 +145,32 @@ describe('request ids and unexpected errors', () => {
     expect(made.headers['x-request-id']).toMatch(/^[0-9a-f-]{36}$/);
   });
 
+  it('when the database connection is lost or too slow mid-request, then 503 SERVICE_UNAVAILABLE, never 500', async () => {
+    const { errorHandler } = await import('../../server/errors');
+    const { DatabaseTimeoutError } = await import('../../server/db/db');
+    const express = (await import('express')).default;
+    const lost: unknown[] = [
+      Object.assign(new Error('write EPIPE'), { code: 'EPIPE' }),
+      Object.assign(new Error('read ECONNRESET'), { code: 'ECONNRESET' }),
+      Object.assign(new Error('Connection lost: The server closed the connection.'), { code: 'PROTOCOL_CONNECTION_LOST', fatal: true }),
+      // mysql2, for a query on a connection that has been closed (no code, only `fatal`).
+      Object.assign(new Error("Can't add new command when connection is in closed state"), { fatal: true }),
+      Object.assign(new Error('Server shutdown in progress'), { code: 'ER_SERVER_SHUTDOWN', errno: 1053 }),
+      Object.assign(new Error('Connection was killed'), { code: 'ER_CONNECTION_KILLED', errno: 1927 }),
+      new DatabaseTimeoutError(5000),
+    ];
+    const app = express();
+    app.get('/fail/:i', (req) => {
+      throw lost[Number(req.params.i)];
+    });
+    app.use(errorHandler({ info: () => undefined, error: () => undefined }));
+    for (let i = 0; i < lost.length; i++) {
+      const res = await request(app).get(`/fail/${i}`);
+      expect(`${i}: ${res.status}`).toBe(`${i}: 503`);
+      expect(res.body).toEqual({ errors: [{ code: 'SERVICE_UNAVAILABLE', message: expect.any(String) }] });
+    }
+  });
+
   it('when a handler throws something unexpected, then the client gets only the generic message and the request id is logged', async () => {
     const { errorHandler } = await import('../../server/errors');
     const express = (await import('express')).default;

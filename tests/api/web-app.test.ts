@@ -57,7 +57,7 @@ describe('serving the exported web app', () => {
       expect(missing.text).toContain('not found');
       await request(a).get('/_expo/x.js').expect(200).expect('Content-Type', /javascript/);
     } finally {
-      await a.locals.calc.close();
+      await a.locals.close();
     }
   });
 
@@ -75,7 +75,7 @@ describe('serving the exported web app', () => {
       expect(csp).not.toContain('upgrade-insecure-requests');
       expect((await request(a).get('/')).headers['strict-transport-security']).toBeUndefined();
     } finally {
-      await a.locals.calc.close();
+      await a.locals.close();
     }
   });
 
@@ -86,7 +86,7 @@ describe('serving the exported web app', () => {
       expect(res.headers['strict-transport-security']).toMatch(/max-age=/);
       expect(res.headers['content-security-policy']).toContain('upgrade-insecure-requests');
     } finally {
-      await a.locals.calc.close();
+      await a.locals.close();
     }
   });
 
@@ -98,7 +98,7 @@ describe('serving the exported web app', () => {
       await request(a).get('/api/v1/health').expect(200);
       await request(a).get('/api/v1/nothing-here').expect(404);
     } finally {
-      await a.locals.calc.close();
+      await a.locals.close();
     }
   });
 });

@@ -12,12 +12,14 @@ export type Agent = ReturnType<typeof request.agent> & { csrf: string };
 
 export type ApiContext = {
   db: Knex;
+  /** The test database's name (to open more handles on it). */
+  dbName: string;
   config: Config;
   app: LaglineApp;
   mail: TestMail;
   mailer: Mailer;
-  /** A new app on the same database and secret (a server restart). */
-  restart: (overrides?: Partial<Config>) => LaglineApp;
+  /** A new app on the same database and secret (a server restart), optionally on another handle to it. */
+  restart: (overrides?: Partial<Config>, opts?: { db?: Knex }) => LaglineApp;
   /** A cookie-keeping client that has fetched its CSRF token. */
   agent: (app?: LaglineApp) => Promise<Agent>;
   close: () => Promise<void>;
@@ -30,14 +32,15 @@ export async function createApiContext(opts: { seed?: boolean; config?: Partial<
   const config = testConfig(opts.config, opts.env);
   const mailer = createMailer({ mailFrom: config.mailFrom, smtp: { host: '127.0.0.1', port: mail.port } });
   const apps: LaglineApp[] = [];
-  const make = (overrides: Partial<Config> = {}) => {
-    const a = createApp({ db: database.db, mailer, config: Object.freeze({ ...config, ...overrides }) });
+  const make = (overrides: Partial<Config> = {}, opts: { db?: Knex } = {}) => {
+    const a = createApp({ db: opts.db ?? database.db, mailer, config: Object.freeze({ ...config, ...overrides }) });
     apps.push(a);
     return a;
   };
   const app = make();
   const ctx: ApiContext = {
     db: database.db,
+    dbName: database.name,
     config,
     app,
     mail,
@@ -50,10 +53,7 @@ export async function createApiContext(opts: { seed?: boolean; config?: Partial<
       return agent;
     },
     close: async () => {
-      for (const a of apps) {
-        await a.locals.jobs.stop();
-        await a.locals.calc.close();
-      }
+      for (const a of apps) await a.locals.close();
       mailer.close();
       await mail.close();
       await database.drop();

@@ -8,6 +8,8 @@ export function testConfig(overrides: Partial<Config> = {}, env: Env = {}): Conf
     SESSION_SECRET: 'test-secret-0123456789-abcdefghijklmnopqrstuvwxyz',
     BCRYPT_COST: '4',
     RATE_LIMIT_SIGNIN: '1000',
+    RATE_LIMIT_SIGNUP: '1000',
+    RATE_LIMIT_SIGNUP_ATTEMPTS: '1000',
     RATE_LIMIT_RESET: '1000',
     RATE_LIMIT_INVITE: '1000',
     RATE_LIMIT_CALCULATIONS: '1000',

@@ -44,8 +44,7 @@ export async function startTestServer(opts: { seed?: boolean; config?: Partial<C
     close: async () => {
       server.closeAllConnections?.();
       await new Promise<void>((resolve) => server.close(() => resolve()));
-      await app.locals.jobs.stop();
-      await app.locals.calc.close();
+      await app.locals.close();
       mailer.close();
       await mail.close();
       await database.drop();

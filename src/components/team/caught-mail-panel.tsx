@@ -29,21 +29,26 @@ function MailBody({ text }: { text: string }) {
 }
 
 /**
- * Development only: the messages the local mail catcher received, so invitations and reset links can
- * be followed without a real inbox. Hidden when the server has no catcher (it answers 404).
+ * A development aid: the mail this team's own actions sent (its invitations) as the local mail catcher
+ * received it, so they can be followed without a real inbox. Password-reset mail is never shown.
+ * Hidden when the server runs without the catcher (the view answers 404) and for roles other than owner.
  */
 export function CaughtMailPanel() {
   const mail = useDevMail(true);
   if (mail.isError && mail.error instanceof ApiProblemError && ['not-found', 'forbidden'].includes(mail.error.problem.kind)) return null;
   return (
-    <Card title="Caught mail" subtitle="Development only: e-mail the local catcher received instead of sending it out." testID="caught-mail">
+    <Card
+      title="Caught mail"
+      subtitle="A development aid: this server runs a local mail catcher instead of sending e-mail. Shown here is the mail your team's own actions sent, such as invitations; password-reset mail is never shown."
+      testID="caught-mail"
+    >
       <Button label="Refresh" variant="secondary" onPress={() => void mail.refetch()} busy={mail.isFetching} />
       {mail.isPending ? (
         <Loading label="Loading caught mail…" />
       ) : mail.isError ? (
         <QueryError error={mail.error} onRetry={() => void mail.refetch()} title="Could not load caught mail" />
       ) : mail.data.messages.length === 0 ? (
-        <Text tone="textMuted">Nothing caught yet. Invitations and password resets will appear here.</Text>
+        <Text tone="textMuted">Nothing caught yet. Invitations your team sends will appear here.</Text>
       ) : (
         <View role="list" style={styles.list}>
           {mail.data.messages.map((m) => (
