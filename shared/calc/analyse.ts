@@ -14,15 +14,18 @@
 import { burnCheck } from './burn';
 import { AIR_PROPERTIES_SOURCE, AIR_TABLE_MAX_K, AIR_TABLE_MIN_K, airProperties } from './air-properties';
 import { DEW_POINT_VALID_RANGE_C, dewPointC } from './dew-point';
-import { ImpossibleTargetError } from './errors';
-import { RE_MAX_FLAT_PLATE, REPR_MIN_CYLINDER_CROSSFLOW } from './forced-convection';
+import { CONDUCTIVITY_MAX_W_PER_MK, CONDUCTIVITY_MIN_W_PER_MK, KirchhoffBracket, kirchhoffBracket } from './conduction';
+import { CalcInputError, EnergyBalanceError, ImpossibleTargetError } from './errors';
+import { RE_CRITICAL_FLAT_PLATE, RE_MAX_FLAT_PLATE, REPR_MIN_CYLINDER_CROSSFLOW } from './forced-convection';
 import {
+  RA_BRANCH_PLATE_UPPER_HOT,
   RA_RANGE_HORIZONTAL_CYLINDER,
   RA_RANGE_PLATE_LOWER_HOT,
   RA_RANGE_PLATE_UPPER_HOT,
   RA_RANGE_VERTICAL_PLATE,
   rayleighNumberIdealGas,
 } from './natural-convection';
+import { polynomialRange } from './polynomial';
 import { KELVIN_OFFSET } from './radiation';
 import {
   FORCED_CYLINDER,
@@ -33,6 +36,7 @@ import {
   NATURAL_VERTICAL_PLATE,
   SurfaceModel,
   checkConductivitySpans,
+  energyBalanceMismatch,
   interfaceTemperatures,
   solveSurface,
 } from './surface-balance';
@@ -63,6 +67,11 @@ type Prepared = {
   radiantC: number;
   windMS: number;
   dewC: number | undefined;
+  /** Every temperature of the case lies in [min, max] of the process, air and radiant temperatures [°C]. */
+  domainLoC: number;
+  domainHiC: number;
+  /** Roots of each k(T) over the domain, computed once per polynomial. */
+  brackets: Map<readonly number[], KirchhoffBracket>;
 };
 
 /** The surfaces of a build-up before they are solved; `names` only for a vessel's parts. */
@@ -75,11 +84,23 @@ type Evaluation = Surfaces & {
   governing: number;
   maxSurfaceC: number;
   minSurfaceC: number;
+  /** Every part's balance closed. */
+  balanced: boolean;
 };
+
+function bracketOf(p: Prepared, k: readonly number[]): KirchhoffBracket {
+  let b = p.brackets.get(k);
+  if (!b) {
+    b = kirchhoffBracket(k, p.domainLoC, p.domainHiC);
+    p.brackets.set(k, b);
+  }
+  return b;
+}
 
 function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number): SurfaceModel {
   return {
     coeffs,
+    brackets: coeffs.map((k) => bracketOf(p, k)),
     factor: new Float64Array(layerCount),
     seriesR: 0,
     area: 1,
@@ -97,6 +118,8 @@ function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount:
     heatFlow: 0,
     hc: 0,
     hr: 0,
+    balanced: false,
+    atBranchChange: false,
   };
 }
 
@@ -212,6 +235,7 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
   let gov = 0;
   let maxT = -Infinity;
   let minT = Infinity;
+  let balanced = true;
   for (let i = 0; i < ms.length; i++) {
     if (i === 2 && horizontalVessel) {
       // Both heads of a horizontal vessel are the same vertical surface.
@@ -221,10 +245,13 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
       h2.heatFlow = h1.heatFlow;
       h2.hc = h1.hc;
       h2.hr = h1.hr;
+      h2.balanced = h1.balanced;
+      h2.atBranchChange = h1.atBranchChange;
     } else {
       solveSurface(ms[i]);
     }
     const m = ms[i];
+    if (!m.balanced) balanced = false;
     total += m.heatFlow;
     if (m.surfaceC > maxT) {
       maxT = m.surfaceC;
@@ -232,11 +259,11 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
     }
     if (m.surfaceC < minT) minT = m.surfaceC;
   }
-  return { models: ms, names, heatFlow: total, governing: gov, maxSurfaceC: maxT, minSurfaceC: minT };
+  return { models: ms, names, heatFlow: total, governing: gov, maxSurfaceC: maxT, minSurfaceC: minT, balanced };
 }
 
 /** Marches the fluid along the run; the single pipe model is re-solved at each local temperature. */
-function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: number; heatW: number } {
+function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: number; heatW: number; balanced: boolean } {
   const run = p.c.run!;
   const m = ev.models[0];
   const seg = run.lengthM / RUN_SEGMENTS;
@@ -250,21 +277,27 @@ function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: numbe
     return T - (q * seg) / mc;
   };
   let T = inletC;
+  let balanced = true;
   for (let s = 0; s < RUN_SEGMENTS; s++) {
     m.processC = T;
     solveSurface(m);
+    balanced &&= m.balanced;
     const Tpred = step(T, m.heatFlow, T);
     const Tmid = 0.5 * (T + Tpred);
     m.processC = Tmid;
     solveSurface(m);
+    balanced &&= m.balanced;
     T = step(T, m.heatFlow, Tmid);
   }
   m.processC = inletC;
   solveSurface(m);
-  return { outletC: T, heatW: mc * (inletC - T) };
+  return { outletC: T, heatW: mc * (inletC - T), balanced };
 }
 
-/** Hours for standing water to cool from `startC` to 0 °C, or null when it never gets there. */
+/**
+ * Hours for standing water to cool from `startC` to 0 °C, or null when it never gets there; NaN when a
+ * surface balance along the way did not close.
+ */
 function freezeHours(p: Prepared, ev: Evaluation, startC: number): number | null {
   if (startC <= 0) return 0;
   if (p.airC >= 0) return null;
@@ -279,6 +312,11 @@ function freezeHours(p: Prepared, ev: Evaluation, startC: number): number | null
   for (let j = 0; j <= FREEZE_INTERVALS; j++) {
     m.processC = j * h;
     solveSurface(m);
+    if (!m.balanced) {
+      m.processC = startC;
+      solveSurface(m);
+      return NaN;
+    }
     const q = m.heatFlow;
     if (!(q > 0)) {
       m.processC = startC;
@@ -298,7 +336,10 @@ function heatLossLimit(p: Prepared, crit: Extract<Criterion, { criterion: 'heatL
   return (t === 'pipe' ? crit.maxWPerM : t === 'flat' ? crit.maxWPerM2 : crit.maxW) as number;
 }
 
-/** How far an evaluated build-up is inside the criterion (≥ 0 passes), in the criterion's own unit. */
+/**
+ * How far an evaluated build-up is inside the criterion (≥ 0 passes), in the criterion's own unit;
+ * −∞ when a surface balance of the run or the cooling water did not close.
+ */
 function criterionMargin(p: Prepared, crit: Criterion, ev: Evaluation): number {
   switch (crit.criterion) {
     case 'surfaceTemperature':
@@ -309,11 +350,11 @@ function criterionMargin(p: Prepared, crit: Criterion, ev: Evaluation): number {
       return ev.minSurfaceC - ((p.dewC as number) + crit.marginK);
     case 'temperatureChange': {
       const r = marchRun(p, ev, p.c.processTemperatureC);
-      return crit.maxChangeK - Math.abs(p.c.processTemperatureC - r.outletC);
+      return r.balanced ? crit.maxChangeK - Math.abs(p.c.processTemperatureC - r.outletC) : -Infinity;
     }
     case 'freezeTime': {
       const hrs = freezeHours(p, ev, p.c.processTemperatureC);
-      return hrs === null ? Infinity : hrs - crit.minHours;
+      return hrs === null ? Infinity : hrs !== hrs ? -Infinity : hrs - crit.minHours;
     }
   }
 }
@@ -354,19 +395,28 @@ function impossibleAdvice(crit: Criterion): string {
 function solveThickness(p: Prepared, crit: Criterion, maxT: number, baseThick: number[], coeffs: number[][]): number {
   const last = baseThick.length - 1;
   const thick = baseThick.slice();
+  let ev: Evaluation | undefined;
   const g = (t: number): number => {
     thick[last] = t;
-    return criterionMargin(p, crit, evaluate(p, thick, coeffs, p.c.processTemperatureC));
+    ev = evaluate(p, thick, coeffs, p.c.processTemperatureC);
+    // A build-up whose balance does not close is no valid answer.
+    return ev.balanced ? criterionMargin(p, crit, ev) : -Infinity;
   };
   const gMax = g(maxT);
   if (!(gMax >= 0)) {
+    // A layer that cannot carry the flow, or a balance that does not close, explains more than the target.
+    const evMax = ev as Evaluation;
+    const index = baseThick.map((_, i) => i);
+    for (const m of evMax.models) checkConductivitySpans(m, (i) => index[i]);
+    if (gMax === -Infinity) throw balanceError();
     throw new ImpossibleTargetError(
       `No thickness of the outer layer up to ${(maxT * 1000).toFixed(0)} mm gives ${describeCriterion(p, crit)}: ` +
         `at ${(maxT * 1000).toFixed(0)} mm it still misses by ${Math.abs(gMax).toPrecision(3)}. ${impossibleAdvice(crit)}`,
     );
   }
   // Scan downward: below the critical radius a thin layer can be worse than none, so the answer is the
-  // top of the highest failing interval, not the first pass met from below.
+  // top of the highest failing interval, not the first pass met from below. A build-up whose balance does
+  // not close counts as failing, so t* never rests on one.
   let pass = maxT;
   for (let i = SCAN_POINTS - 1; i >= 0; i--) {
     const t = (maxT * i * i) / (SCAN_POINTS * SCAN_POINTS);
@@ -493,6 +543,7 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
       }
     }
   }
+  if (m.atBranchChange) warnings.push(branchChangeWarning(m, label, filmK, air.nu, air.Pr, dT));
   if (m.windMS > 0) {
     method.add(METHOD_FORCED[m.forcedKind]);
     method.add('Combined convection: h = (h_forced³ + h_natural³)^⅓');
@@ -512,15 +563,75 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
   }
 }
 
+/** Where the surface sits on a step between two published branches of a correlation. */
+function branchChangeWarning(m: SurfaceModel, label: string, filmK: number, nu: number, Pr: number, dT: number): Warning {
+  const near = (x: number, at: number) => Math.abs(x / at - 1) < 1e-3;
+  const Ra = rayleighNumberIdealGas(dT, m.naturalLengthM, filmK, nu, Pr);
+  const plumeAway =
+    (m.naturalKind === NATURAL_FACE_UP && dT >= 0) || (m.naturalKind === NATURAL_FACE_DOWN && dT < 0);
+  let where: string;
+  if (plumeAway && near(Ra, RA_BRANCH_PLATE_UPPER_HOT)) {
+    where = `Ra_L = ${fmt(Ra)}, where the McAdams branches 0.54·Ra^¼ and 0.15·Ra^⅓ of a horizontal plate meet with a step`;
+  } else if (m.windMS > 0 && m.forcedKind === FORCED_PLATE && near((m.windMS * m.forcedLengthM) / nu, RE_CRITICAL_FLAT_PLATE)) {
+    where = `Re_L = ${fmt((m.windMS * m.forcedLengthM) / nu)}, where the flat plate's laminar and mixed boundary-layer branches meet with a step`;
+  } else {
+    where = 'a point where a convection correlation steps between branches';
+  }
+  return {
+    code: 'CORRELATION_BRANCH_CHANGE',
+    message: `${label}: the surface sits at ${where}; h_c is taken between the two branches, at the value that closes the energy balance, so it is uncertain by the size of the step.`,
+  };
+}
+
+/** Lowest emissivity of a real surface that the tested domain covers (polished silver and gold, about 0.02). */
+const EMISSIVITY_LOWEST_REAL = 0.02;
+
 function prepare(c: CalcCase): Prepared {
   const a = c.ambient;
+  const airC = a.airTemperatureC;
+  const radiantC = a.radiantTemperatureC ?? a.airTemperatureC;
   return {
     c,
-    airC: a.airTemperatureC,
-    radiantC: a.radiantTemperatureC ?? a.airTemperatureC,
+    airC,
+    radiantC,
     windMS: a.windSpeedMS ?? 0,
     dewC: a.relativeHumidityPct === undefined ? undefined : dewPointC(a.airTemperatureC, a.relativeHumidityPct),
+    domainLoC: Math.min(c.processTemperatureC, airC, radiantC),
+    domainHiC: Math.max(c.processTemperatureC, airC, radiantC),
+    brackets: new Map(),
   };
+}
+
+function balanceError(): EnergyBalanceError {
+  return new EnergyBalanceError(
+    'The heat conducted through the layers and the heat leaving the surface by convection and radiation do not agree ' +
+      'within 1e-6 for this case, so no result is given; please report it with the input.',
+  );
+}
+
+/**
+ * Refuses a layer whose k(T) lies outside the physical range at every temperature of the case (a wrong unit
+ * or a lost exponent): no span could make it valid, and the solve would only produce a meaningless number.
+ * The exact check over each layer's own span follows the solve.
+ */
+function checkConductivityPlausible(p: Prepared): void {
+  const layers = p.c.layers;
+  for (let i = 0; i < layers.length; i++) {
+    const solved = p.c.solveFor !== undefined && i === layers.length - 1;
+    if (!solved && !(layers[i].thicknessM > 0)) continue;
+    const r = polynomialRange(layers[i].conductivity, p.domainLoC, p.domainHiC);
+    if (!(r.max >= CONDUCTIVITY_MIN_W_PER_MK && r.min <= CONDUCTIVITY_MAX_W_PER_MK)) {
+      const high = !(r.min <= CONDUCTIVITY_MAX_W_PER_MK);
+      throw new CalcInputError(
+        `layers[${i}].conductivity`,
+        `Conductivity k(T) must lie within ${CONDUCTIVITY_MIN_W_PER_MK}…${CONDUCTIVITY_MAX_W_PER_MK} W/(m·K) over the layer's ` +
+          `temperature span, but over the case's temperatures ${p.domainLoC.toFixed(1)}…${p.domainHiC.toFixed(1)} °C it ` +
+          `is ${high ? `at least ${r.min.toPrecision(3)}` : `at most ${r.max.toPrecision(3)}`} W/(m·K). ` +
+          'Check the coefficients, their unit (W/(m·K)) and their temperature unit (°C).',
+        'CONDUCTIVITY_OUT_OF_RANGE',
+      );
+    }
+  }
 }
 
 /**
@@ -550,6 +661,7 @@ function prepare(c: CalcCase): Prepared {
 export function analyse(input: CalcCase): CalcResult {
   const c = validateCase(input);
   const p = prepare(c);
+  checkConductivityPlausible(p);
   const g = c.geometry;
   const warnings: Warning[] = [];
   const method = new Set<string>();
@@ -585,6 +697,11 @@ export function analyse(input: CalcCase): CalcResult {
 
   const ev = evaluate(p, thick, coeffs, c.processTemperatureC);
   for (const m of ev.models) checkConductivitySpans(m, (i) => layerIndex[i]);
+  const partFaces = ev.models.map(interfaceTemperatures);
+  // Every result checks its own energy balance before any number leaves.
+  for (let i = 0; i < ev.models.length; i++) {
+    if (!(energyBalanceMismatch(ev.models[i], partFaces[i].outerFacesC) <= 1)) throw balanceError();
+  }
 
   method.add('Radiation: Stefan–Boltzmann law, full T⁴ exchange with enclosing surroundings (σ CODATA 2018)');
   method.add(AIR_PROPERTIES_SOURCE);
@@ -598,7 +715,6 @@ export function analyse(input: CalcCase): CalcResult {
   }
 
   const gov = ev.models[ev.governing];
-  const partFaces = ev.models.map(interfaceTemperatures);
   const faces = partFaces[ev.governing];
   // Service temperatures: the hottest and coldest face of each layer over all parts; the data range of k(T)
   // against the layer's mean temperature, as material tables give k at mean temperature.
@@ -641,6 +757,15 @@ export function analyse(input: CalcCase): CalcResult {
     }
   }
 
+  if (c.surfaceEmissivity < EMISSIVITY_LOWEST_REAL) {
+    warnings.push({
+      code: 'EMISSIVITY_BELOW_REAL_SURFACES',
+      message:
+        c.surfaceEmissivity === 0
+          ? 'Surface emissivity 0 leaves radiation out (a convection-only check). Every real surface radiates — polished metal about 0.02–0.1, painted or non-metallic finishes 0.8–0.95 — so a real hot surface loses more heat and runs cooler than this result.'
+          : `Surface emissivity ${c.surfaceEmissivity} is below that of any real finish (polished silver or gold, about 0.02); radiation is all but left out, so a real hot surface loses more heat and runs cooler than this result.`,
+    });
+  }
   const amb = c.ambient;
   if (p.dewC !== undefined) {
     method.add('Dew point: Magnus formula, Alduchov & Eskridge (1996) constants');
@@ -690,12 +815,14 @@ export function analyse(input: CalcCase): CalcResult {
   if (c.run) {
     method.add('Temperature change: segment marching with local exponential decay (20 segments)');
     const r = marchRun(p, ev, c.processTemperatureC);
+    if (!r.balanced) throw balanceError();
     result.outletTemperatureC = r.outletC;
     result.runHeatLossW = r.heatW;
   }
   if (c.stagnant) {
     method.add('Freezing time: quasi-steady lumped cooling of water and pipe, latent heat ignored');
     const h = freezeHours(p, ev, c.processTemperatureC);
+    if (h !== null && h !== h) throw balanceError();
     result.hoursToZeroC = h;
     if (h === null) {
       warnings.push({

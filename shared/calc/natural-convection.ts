@@ -27,6 +27,9 @@ export const RA_RANGE_PLATE_UPPER_HOT: readonly [number, number] = [1e4, 1e11];
 /** Lower face of a hot plate (≡ upper face of a cold plate): 10⁵ ≤ Ra_L ≤ 10¹⁰ [3, 5]. */
 export const RA_RANGE_PLATE_LOWER_HOT: readonly [number, number] = [1e5, 1e10];
 
+/** Ra_L where the two McAdams branches of a hot upper face meet, with a step of about 6 % [3, 5]. */
+export const RA_BRANCH_PLATE_UPPER_HOT = 1e7;
+
 /**
  * Rayleigh number of an ideal gas: Ra = g·(1/T_film)·|ΔT|·L³·Pr/ν².
  *
@@ -91,7 +94,8 @@ export function nusseltVerticalPlateChurchillChu(Ra: number, Pr: number): number
  *
  * @param Ra - Rayleigh number on L = A/P [-]
  * @returns Nu_L [-]
- * @remarks Valid 10⁴ ≤ Ra_L ≤ 10¹¹, Pr ≳ 0.7. The two branches meet with a small step at 10⁷, as published.
+ * @remarks Valid 10⁴ ≤ Ra_L ≤ 10¹¹, Pr ≳ 0.7. The two branches meet with a step at 10⁷ (0.54·10^(7/4) = 30.4
+ * against 0.15·10^(7/3) = 32.3), as published; the surface balance handles a surface that sits on it.
  * @example
  * // Bell, ht Nu_horizontal_plate_McAdams(5.54, 3.21e8, buoyancy=True) = 181.73
  * nusseltHorizontalPlateUpperHotMcAdams(5.54 * 3.21e8); // ≈ 181.73
@@ -99,7 +103,7 @@ export function nusseltVerticalPlateChurchillChu(Ra: number, Pr: number): number
  * References: [3], [4], [5] Eqs. 9.30–9.31.
  */
 export function nusseltHorizontalPlateUpperHotMcAdams(Ra: number): number {
-  return Ra <= 1e7 ? 0.54 * Math.pow(Ra, 0.25) : 0.15 * Math.cbrt(Ra);
+  return Ra <= RA_BRANCH_PLATE_UPPER_HOT ? 0.54 * Math.pow(Ra, 0.25) : 0.15 * Math.cbrt(Ra);
 }
 
 /**

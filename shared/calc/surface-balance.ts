@@ -19,7 +19,14 @@
  */
 
 import { loadAir } from './air-properties';
-import { assertConductivityPositive, innerTemperatureFromKirchhoffDrop } from './conduction';
+import {
+  KirchhoffBracket,
+  assertConductivityInRange,
+  assertConductivityPositive,
+  conductivityAt,
+  conductivityIntegral,
+  innerTemperatureFromKirchhoffDrop,
+} from './conduction';
 import {
   combinedConvectionCoefficient,
   nusseltCylinderCrossFlowChurchillBernstein,
@@ -55,6 +62,8 @@ export const FORCED_PLATE = 1;
 export type SurfaceModel = {
   /** Layer polynomials, inside out. */
   coeffs: number[][];
+  /** Per layer: the roots of k(T) over the case's temperature domain, which bound the Kirchhoff inverse. */
+  brackets: KirchhoffBracket[];
   /** Per layer: K(T_in) − K(T_out) = Q·factor [m⁻¹ basis of Q]. */
   factor: Float64Array;
   /** Film and pipe-wall resistance in series inside the first layer: ΔT = Q·seriesR [K per unit Q]. */
@@ -80,6 +89,16 @@ export type SurfaceModel = {
   heatFlow: number;
   hc: number;
   hr: number;
+  /**
+   * True when the last solve closed its balance: the inward march from the surface ends at the process
+   * temperature within the closure tolerance (see `solveSurface`).
+   */
+  balanced: boolean;
+  /**
+   * True when the surface sits on a step of a convection correlation (a published branch change): h_c is
+   * then the value between the two branches that closes the balance.
+   */
+  atBranchChange: boolean;
 };
 
 const AIR = new Float64Array(3);
@@ -127,60 +146,123 @@ export function convectionCoefficientOf(m: SurfaceModel, surfaceC: number): numb
 
 let lastHeatFlow = 0;
 let lastHc = 0;
+/** Temperature drop across the innermost resistance in the last residual [K], for the closure tolerance. */
+let lastInnerDrop = 0;
 
-function residual(m: SurfaceModel, surfaceC: number): number {
+/** Outward heat flow at surface temperature `surfaceC` [W per basis]; sets `lastHc`. */
+function surfaceHeatFlow(m: SurfaceModel, surfaceC: number): number {
   const hc = convectionCoefficientOf(m, surfaceC);
+  lastHc = hc;
   const q =
     hc * (surfaceC - m.airC) + radiativeHeatFlux(m.emissivity, surfaceC + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
-  const Q = q * m.area;
-  lastHeatFlow = Q;
-  lastHc = hc;
+  return q * m.area;
+}
+
+/**
+ * Temperature reached at the process side by marching heat flow Q inward from the surface at `surfaceC`,
+ * minus the process temperature (K). ±1e30 when a layer cannot carry Q (k reaches zero first): the true
+ * inner temperature then lies beyond in Q's direction. Sets `lastInnerDrop`.
+ */
+function closureOf(m: SurfaceModel, surfaceC: number, Q: number): number {
   let T = surfaceC;
+  let drop = NaN;
   const factor = m.factor;
   for (let i = factor.length - 1; i >= 0; i--) {
     const f = factor[i];
     if (f === 0) continue;
-    T = innerTemperatureFromKirchhoffDrop(m.coeffs[i], T, Q * f);
-    // No temperature with k > 0 carries this flow: the true inner temperature is "beyond" in Q's direction.
-    if (T !== T) return Q > 0 ? 1e30 : -1e30;
+    const Tn = innerTemperatureFromKirchhoffDrop(m.coeffs[i], T, Q * f, m.brackets[i]);
+    if (Tn !== Tn) return Q > 0 ? 1e30 : -1e30;
+    drop = Tn - T;
+    T = Tn;
   }
-  T += Q * m.seriesR;
+  // The check recomputes the innermost layer with the process temperature, so the closure counts against
+  // that layer's drop; without layers, against the film and wall.
+  if (m.seriesR > 0) {
+    const d = Q * m.seriesR;
+    if (drop !== drop) drop = d;
+    T += d;
+  }
+  lastInnerDrop = drop === drop ? drop : 0;
   return T - m.processC;
 }
 
-/** Converged when the bracket on Ts is narrower than this [K]. */
-const SURFACE_TOLERANCE_K = 1e-7;
+function residual(m: SurfaceModel, surfaceC: number): number {
+  const Q = surfaceHeatFlow(m, surfaceC);
+  lastHeatFlow = Q;
+  return closureOf(m, surfaceC, Q);
+}
 
 /**
- * Solves the surface balance of `m` in place (Brent's method on Ts; see the module header for the bracket
- * and monotonicity argument) and stores Ts, Q, h_c and h_r on the model.
+ * Closure the solve aims for [K]: a small part of the drop across the innermost resistance, whose
+ * conduction the energy-balance check recomputes with the process temperature (so the mismatch there is
+ * closure/drop, relative), with a floor at the rounding of temperatures.
+ */
+function closureTolerance(innerDropK: number): number {
+  return 1e-9 * Math.abs(innerDropK) + 1e-11;
+}
+
+/** Closure accepted as balanced [K]: well inside the energy-balance check's 1e-6 relative. */
+function closureAllowed(innerDropK: number): number {
+  return 1e-7 * Math.abs(innerDropK) + 1e-10;
+}
+
+/**
+ * Solves the surface balance of `m` in place and stores Ts, Q, h_c and h_r on the model.
  *
- * @param m - the surface model; `surfaceC`, `heatFlow`, `hc`, `hr` are overwritten
+ * Brent's method on Ts over the bracket [min, max] of the process, air and radiant temperatures (see the
+ * module header for why r(Ts) is increasing there). It stops when the closure — the process-side
+ * temperature reached by marching the surface's heat flow inward, minus the process temperature — is a
+ * billionth of the drop across the innermost layer, or when the bracket has shrunk to rounding. A bracket
+ * that shrinks onto a step of r(Ts) without closing means the surface sits on a step of a convection
+ * correlation (the McAdams branch change at Ra = 10⁷, the flat plate's transition at Re = 5·10⁵): the
+ * balance is then closed at that surface temperature with the heat flow found by conduction (bracketed
+ * between the flows on either side of the step), and `atBranchChange` is set. `balanced` says whether the
+ * closure was reached.
+ *
+ * @param m - the surface model; `surfaceC`, `heatFlow`, `hc`, `hr`, `balanced`, `atBranchChange` are overwritten
  * @returns nothing
  * @internal
  */
 export function solveSurface(m: SurfaceModel): void {
+  m.atBranchChange = false;
   let a = Math.min(m.processC, m.airC, m.radiantC);
   let b = Math.max(m.processC, m.airC, m.radiantC);
   let fa = residual(m, a);
-  if (fa === 0 || b - a < SURFACE_TOLERANCE_K) {
-    store(m, a);
+  let qa = lastHeatFlow;
+  let ha = lastHc;
+  let da = lastInnerDrop;
+  let ta = closureTolerance(da);
+  if (Math.abs(fa) <= ta || b - a <= 0) {
+    finish(m, a, qa, ha, fa, da);
     return;
   }
   let fb = residual(m, b);
-  if (fb === 0) {
-    store(m, b);
+  let qb = lastHeatFlow;
+  let hb = lastHc;
+  let db = lastInnerDrop;
+  let tb = closureTolerance(db);
+  if (Math.abs(fb) <= tb) {
+    finish(m, b, qb, hb, fb, db);
     return;
   }
-  // Brent's zero finder (inverse quadratic interpolation, secant, bisection), after Brent (1973) ch. 4.
+  // Brent's zero finder (inverse quadratic interpolation, secant, bisection), after Brent (1973) ch. 4;
+  // the heat flow and h_c of each iterate travel with it, so the answer needs no extra evaluation.
   let c = a;
   let fc = fa;
+  let qc = qa;
+  let hcc = ha;
+  let tc = ta;
+  let dc = da;
   let d = b - a;
   let e = d;
   for (let iter = 0; iter < 200; iter++) {
     if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
       c = a;
       fc = fa;
+      qc = qa;
+      hcc = ha;
+      tc = ta;
+      dc = da;
       d = b - a;
       e = d;
     }
@@ -191,10 +273,33 @@ export function solveSurface(m: SurfaceModel): void {
       fa = fb;
       fb = fc;
       fc = fa;
+      qa = qb;
+      qb = qc;
+      qc = qa;
+      ha = hb;
+      hb = hcc;
+      hcc = ha;
+      ta = tb;
+      tb = tc;
+      tc = ta;
+      da = db;
+      db = dc;
+      dc = da;
     }
-    const tol = 2e-15 * Math.abs(b) + 0.5 * SURFACE_TOLERANCE_K;
+    if (Math.abs(fb) <= tb) break;
+    // Rounding of the surface temperature (a closure of 1e-9 of the drop can need Ts to the last digits
+    // when the insulation's resistance is many times the surface's).
+    const tol = 2 * Number.EPSILON * (Math.abs(b) > 1 ? Math.abs(b) : 1);
     const xm = 0.5 * (c - b);
-    if (Math.abs(xm) <= tol || fb === 0) break;
+    if (Math.abs(xm) <= tol) {
+      // The bracket is at rounding without the closure: a step of the heat flow between b and c means a
+      // step of a correlation; otherwise this is as close as rounding allows.
+      if (Math.abs(qc - qb) > 1e-9 * Math.abs(qb)) {
+        closeAcrossStep(m, b, qb, qc);
+        if (m.atBranchChange) return;
+      }
+      break;
+    }
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
       const s = fb / fa;
       let p: number;
@@ -225,18 +330,70 @@ export function solveSurface(m: SurfaceModel): void {
     }
     a = b;
     fa = fb;
+    qa = qb;
+    ha = hb;
+    ta = tb;
+    da = db;
     b += Math.abs(d) > tol ? d : xm > 0 ? tol : -tol;
     fb = residual(m, b);
+    qb = lastHeatFlow;
+    hb = lastHc;
+    db = lastInnerDrop;
+    tb = closureTolerance(db);
   }
-  store(m, b);
+  finish(m, b, qb, hb, fb, db);
 }
 
-function store(m: SurfaceModel, surfaceC: number): void {
-  residual(m, surfaceC);
+function finish(m: SurfaceModel, surfaceC: number, Q: number, hc: number, closure: number, innerDropK: number): void {
   m.surfaceC = surfaceC;
-  m.heatFlow = lastHeatFlow;
-  m.hc = lastHc;
+  m.heatFlow = Q;
+  m.hc = hc;
   m.hr = radiationCoefficient(m.emissivity, surfaceC + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
+  m.balanced = Math.abs(closure) <= closureAllowed(innerDropK);
+}
+
+/**
+ * The balance at a step of h_c(Ts): at Ts the convection law takes any value between its two sides, so the
+ * heat flow is the one conduction carries from the process to Ts, found between the flows on either side
+ * (closure(Q) at fixed Ts is increasing in Q). Sets `atBranchChange` only when that closes the balance.
+ */
+function closeAcrossStep(m: SurfaceModel, surfaceC: number, q1: number, q2: number): void {
+  let lo = Math.min(q1, q2);
+  let hi = Math.max(q1, q2);
+  let flo = closureOf(m, surfaceC, lo);
+  const fhi = closureOf(m, surfaceC, hi);
+  if (!(flo < 0 && fhi > 0)) return;
+  let Q = lo;
+  let f = flo;
+  let tol = closureTolerance(lastInnerDrop);
+  // Bisection with secant steps (Illinois would do as well; this runs only on the rare step).
+  let fh = fhi;
+  for (let it = 0; it < 200; it++) {
+    Q = hi - (fh * (hi - lo)) / (fh - flo);
+    if (!(Q > lo && Q < hi)) Q = 0.5 * (lo + hi);
+    f = closureOf(m, surfaceC, Q);
+    tol = closureTolerance(lastInnerDrop);
+    if (Math.abs(f) <= tol || hi - lo <= 4 * Number.EPSILON * Math.abs(hi)) break;
+    if (f < 0) {
+      lo = Q;
+      flo = f;
+      fh *= 0.5;
+    } else {
+      hi = Q;
+      fh = f;
+      flo *= 0.5;
+    }
+  }
+  if (!(Math.abs(f) <= closureAllowed(lastInnerDrop))) return;
+  const dT = surfaceC - m.airC;
+  if (!(Math.abs(dT) > 0)) return;
+  const qRad = radiativeHeatFlux(m.emissivity, surfaceC + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
+  m.surfaceC = surfaceC;
+  m.heatFlow = Q;
+  m.hc = (Q / m.area - qRad) / dT;
+  m.hr = radiationCoefficient(m.emissivity, surfaceC + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
+  m.balanced = true;
+  m.atBranchChange = true;
 }
 
 /**
@@ -253,13 +410,14 @@ export function interfaceTemperatures(m: SurfaceModel): { outerFacesC: number[];
   let T = m.surfaceC;
   for (let i = n - 1; i >= 0; i--) {
     out[i] = T;
-    if (m.factor[i] !== 0) T = innerTemperatureFromKirchhoffDrop(m.coeffs[i], T, m.heatFlow * m.factor[i]);
+    if (m.factor[i] !== 0) T = innerTemperatureFromKirchhoffDrop(m.coeffs[i], T, m.heatFlow * m.factor[i], m.brackets[i]);
   }
   return { outerFacesC: out, innerC: T };
 }
 
 /**
- * Checks k > 0 over every layer's solved span; throws CalcInputError naming `layers[i].conductivity`.
+ * Checks k over every layer's solved span: positive (CONDUCTIVITY_NOT_POSITIVE) and within the physical
+ * range (CONDUCTIVITY_OUT_OF_RANGE); throws CalcInputError naming `layers[i].conductivity`.
  * @internal
  */
 export function checkConductivitySpans(m: SurfaceModel, layerIndex: (i: number) => number): void {
@@ -277,8 +435,59 @@ export function checkConductivitySpans(m: SurfaceModel, layerIndex: (i: number) 
   let Tin = innerC;
   for (let i = 0; i < outerFacesC.length; i++) {
     if (m.factor[i] !== 0) {
-      assertConductivityPositive(m.coeffs[i], Tin, outerFacesC[i], `layers[${layerIndex(i)}].conductivity`);
+      assertConductivityInRange(m.coeffs[i], Tin, outerFacesC[i], `layers[${layerIndex(i)}].conductivity`);
     }
     Tin = outerFacesC[i];
   }
+}
+
+/** Relative tolerance of the energy-balance check. */
+export const ENERGY_BALANCE_TOLERANCE = 1e-6;
+/** Temperatures are known to about this much [K]; a layer's check allows its conductance times it. */
+const BALANCE_TEMPERATURE_FLOOR_K = 1e-9;
+
+/**
+ * The energy balance of a solved surface, recomputed from its reported state: the heat flow conducted
+ * through each layer, from the Kirchhoff integral between its faces (the first layer's inner face being the
+ * process temperature less the drop across the film and pipe wall at the surface's heat flow), against the
+ * surface's convection h_c·(Ts − T_air) plus radiation ε·σ·(Ts⁴ − T_rad⁴).
+ *
+ * @param m - a solved model
+ * @param outerFacesC - its reported outer-face temperatures, inside out [°C]
+ * @returns the worst mismatch over the layers as a multiple of the allowed one (≤ 1 passes): the allowed
+ *   mismatch of a layer is {@link ENERGY_BALANCE_TOLERANCE}·|Q| plus its conductance times 1e-9 K (the
+ *   rounding of the temperatures themselves); NaN when any figure is not finite
+ * @remarks A bare surface without film or wall has no conduction to check; its surface must then sit at
+ * the process temperature.
+ * @internal
+ */
+export function energyBalanceMismatch(m: SurfaceModel, outerFacesC: readonly number[]): number {
+  const Ts = m.surfaceC;
+  const qRad = radiativeHeatFlux(m.emissivity, Ts + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
+  const Q = m.area * (m.hc * (Ts - m.airC) + qRad);
+  let worst = 0;
+  let Tin = m.processC - Q * m.seriesR;
+  let anyLayer = false;
+  for (let i = 0; i < m.factor.length; i++) {
+    const f = m.factor[i];
+    const Tout = outerFacesC[i];
+    if (f === 0) continue;
+    anyLayer = true;
+    const c = m.coeffs[i];
+    const Qi = (conductivityIntegral(c, Tin) - conductivityIntegral(c, Tout)) / f;
+    const g = Math.max(Math.abs(conductivityAt(c, Tin)), Math.abs(conductivityAt(c, Tout))) / f;
+    const r = Math.abs(Qi - Q) / (ENERGY_BALANCE_TOLERANCE * Math.abs(Q) + g * BALANCE_TEMPERATURE_FLOOR_K);
+    if (r !== r) return NaN;
+    if (r > worst) worst = r;
+    Tin = Tout;
+  }
+  if (!anyLayer) {
+    const dT = Math.abs(m.processC - Ts - Q * m.seriesR);
+    const allowed =
+      m.seriesR > 0
+        ? ENERGY_BALANCE_TOLERANCE * Math.abs(Q) * m.seriesR + BALANCE_TEMPERATURE_FLOOR_K
+        : BALANCE_TEMPERATURE_FLOOR_K;
+    worst = dT / allowed;
+  }
+  return worst;
 }
