@@ -11,7 +11,12 @@
  * natural- and forced-convection correlation used and ε·σ·Ts⁴ rises; T_inner rises with both Ts and Q
  * because each layer's K(T) is increasing wherever k > 0. So r(Ts) is increasing. At
  * Ts = min(T_process, T_air, T_rad) Q ≤ 0 gives r ≤ 0, at the max Q ≥ 0 gives r ≥ 0: the bracket
- * [min, max] always holds the single root.
+ * [min, max] always holds the single root. Two things keep r(Ts) a function Brent can trust: the Kirchhoff
+ * inverse of each layer is bracketed inside the interval where its k > 0 (ends at the real roots of k(T)),
+ * and beyond the case's temperature range K is continued linearly, so r stays finite and increasing; and
+ * where a correlation steps between published branches (r jumps), the balance is closed on the step itself.
+ * Each solve records whether its closure was reached (`balanced`); results are checked again from their
+ * reported faces ({@link energyBalanceMismatch}).
  *
  * References:
  * 1. R. P. Brent, *Algorithms for Minimization without Derivatives*, Prentice-Hall, 1973, ch. 4 (zero).
