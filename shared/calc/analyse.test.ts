@@ -324,6 +324,17 @@ describe('physical bounds and checks', () => {
     expect(code([{ thicknessM: 0.05, conductivity: [0.04, 0, 0, 0, 0, 0, 0, 1e-14] }])).toBe('CONDUCTIVITY_OUT_OF_RANGE layers[0].conductivity');
   });
 
+  it('when a layer is vanishingly thin or the process sits at the air temperature, then a balanced result still comes back', () => {
+    for (const c of [
+      pipe({ layers: [{ thicknessM: 5e-324, conductivity: [0.02] }, { thicknessM: 1e-17, conductivity: [0.03, 1e-4] }] }),
+      pipe({ geometry: { type: 'flat', orientation: 'faceUp', characteristicLengthM: 0.05 }, processTemperatureC: 2e-14, ambient: { airTemperatureC: 0 } }),
+      pipe({ processTemperatureC: 30, ambient: { airTemperatureC: 30 } }),
+    ]) {
+      const o = runCase(c);
+      expect('error' in o ? o.error.code : 'result').toBe('result');
+    }
+  });
+
   it('when the emissivity is 0 or below any real finish, then the result warns that radiation is (all but) left out', () => {
     const codes = (eps: number) => analyse(pipe({ surfaceEmissivity: eps })).warnings.map((w) => w.code);
     expect(codes(0)).toContain('EMISSIVITY_BELOW_REAL_SURFACES');
@@ -356,6 +367,8 @@ describe('physical bounds and checks', () => {
       hr: 0,
       balanced: false,
       atBranchChange: false,
+      guessC: NaN,
+      slope: 0,
     };
     solveSurface(m);
     expect(m.balanced).toBe(true);

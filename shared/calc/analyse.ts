@@ -72,6 +72,11 @@ type Prepared = {
   domainHiC: number;
   /** Roots of each k(T) over the domain, computed once per polynomial. */
   brackets: Map<readonly number[], KirchhoffBracket>;
+  /**
+   * Surface models by part (pipe, wall or shell; head 1; head 2), kept so that the thickness search and the
+   * run march re-solve the same objects (no allocation) and each solve starts from the last answer.
+   */
+  models: (SurfaceModel | undefined)[];
 };
 
 /** The surfaces of a build-up before they are solved; `names` only for a vessel's parts. */
@@ -97,8 +102,24 @@ function bracketOf(p: Prepared, k: readonly number[]): KirchhoffBracket {
   return b;
 }
 
-function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number): SurfaceModel {
-  return {
+/**
+ * The model of part `slot` for this build-up: the previous one re-initialised when it has the same layer
+ * polynomials (the thickness search), so it keeps its warm start; else a new one that inherits it.
+ */
+function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number, slot: number): SurfaceModel {
+  const old = p.models[slot];
+  if (old && old.coeffs === coeffs && old.factor.length === layerCount) {
+    old.seriesR = 0;
+    old.area = 1;
+    old.naturalKind = NATURAL_VERTICAL_PLATE;
+    old.naturalLengthM = 1;
+    old.forcedKind = FORCED_PLATE;
+    old.forcedLengthM = 1;
+    old.processC = processC;
+    old.outerDiameterM = 0;
+    return old;
+  }
+  const m: SurfaceModel = {
     coeffs,
     brackets: coeffs.map((k) => bracketOf(p, k)),
     factor: new Float64Array(layerCount),
@@ -120,7 +141,11 @@ function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount:
     hr: 0,
     balanced: false,
     atBranchChange: false,
+    guessC: old ? old.guessC : NaN,
+    slope: old ? old.slope : 0,
   };
+  p.models[slot] = m;
+  return m;
 }
 
 /** Cylindrical build-up from radius r0; Q basis per `lengthM` metres (1 for pipes). */
@@ -133,7 +158,7 @@ function cylinderModel(
   coeffs: number[][],
 ): SurfaceModel {
   const n = thicknesses.length;
-  const m = newModel(p, processC, coeffs, n);
+  const m = newModel(p, processC, coeffs, n, 0);
   let r = r0;
   for (let i = 0; i < n; i++) {
     const r2 = r + thicknesses[i];
@@ -170,7 +195,7 @@ function buildSurfaces(p: Prepared, thicknesses: readonly number[], coeffs: numb
   }
   if (g.type === 'flat') {
     const n = thicknesses.length;
-    const m = newModel(p, processC, coeffs, n);
+    const m = newModel(p, processC, coeffs, n, 0);
     for (let i = 0; i < n; i++) m.factor[i] = thicknesses[i];
     if (film) m.seriesR = 1 / film;
     m.area = 1;
@@ -199,7 +224,7 @@ function buildSurfaces(p: Prepared, thicknesses: readonly number[], coeffs: numb
   const heads: SurfaceModel[] = [];
   for (let h = 0; h < 2; h++) {
     const n = thicknesses.length;
-    const m = newModel(p, processC, coeffs, n);
+    const m = newModel(p, processC, coeffs, n, 1 + h);
     let offset = 0;
     let A1 = headArea(g.headType, D, 0);
     const A0 = A1;
@@ -414,24 +439,55 @@ function solveThickness(p: Prepared, crit: Criterion, maxT: number, baseThick: n
         `at ${(maxT * 1000).toFixed(0)} mm it still misses by ${Math.abs(gMax).toPrecision(3)}. ${impossibleAdvice(crit)}`,
     );
   }
+  if (p.c.geometry.type === 'flat') {
+    // A slab has no critical thickness: adding to the last layer's resistance moves the balance
+    // monotonically (|Q| falls, Ts moves towards the surroundings), so every criterion's margin is
+    // monotonic in t and the one crossing below a passing maximum is t*; no scan is needed.
+    const g0 = g(0);
+    return g0 >= 0 ? 0 : marginCrossing(g, 0, g0, maxT, gMax);
+  }
   // Scan downward: below the critical radius a thin layer can be worse than none, so the answer is the
   // top of the highest failing interval, not the first pass met from below. A build-up whose balance does
   // not close counts as failing, so t* never rests on one.
   let pass = maxT;
+  let gPass = gMax;
   for (let i = SCAN_POINTS - 1; i >= 0; i--) {
     const t = (maxT * i * i) / (SCAN_POINTS * SCAN_POINTS);
-    if (g(t) < 0) {
-      let fail = t;
-      while (pass - fail > THICKNESS_TOLERANCE_M) {
-        const mid = 0.5 * (pass + fail);
-        if (g(mid) >= 0) pass = mid;
-        else fail = mid;
-      }
-      return pass;
-    }
+    const gt = g(t);
+    if (gt < 0) return marginCrossing(g, t, gt, pass, gPass);
     pass = t;
+    gPass = gt;
   }
   return 0;
+}
+
+/**
+ * The thickness where the margin crosses zero between a failing `fail` (g < 0, possibly −∞) and a passing
+ * `pass` (g ≥ 0), to {@link THICKNESS_TOLERANCE_M}; returns the passing end. Regula falsi with the Illinois
+ * modification (superlinear), bisecting where g is −∞, each step kept half a tolerance inside the bracket so
+ * the bracket itself shrinks to the tolerance.
+ */
+function marginCrossing(g: (t: number) => number, fail: number, gFail: number, pass: number, gPass: number): number {
+  const inset = 0.5 * THICKNESS_TOLERANCE_M;
+  let side = 0;
+  while (pass - fail > THICKNESS_TOLERANCE_M) {
+    let t = gFail > -Infinity ? pass - (gPass * (pass - fail)) / (gPass - gFail) : 0.5 * (pass + fail);
+    if (!(t > fail + inset)) t = fail + inset;
+    if (!(t < pass - inset)) t = pass - inset;
+    const gt = g(t);
+    if (gt >= 0) {
+      pass = t;
+      gPass = gt;
+      if (side === 1) gFail *= 0.5;
+      side = 1;
+    } else {
+      fail = t;
+      gFail = gt;
+      if (side === -1) gPass *= 0.5;
+      side = -1;
+    }
+  }
+  return pass;
 }
 
 /**
@@ -599,6 +655,7 @@ function prepare(c: CalcCase): Prepared {
     domainLoC: Math.min(c.processTemperatureC, airC, radiantC),
     domainHiC: Math.max(c.processTemperatureC, airC, radiantC),
     brackets: new Map(),
+    models: [undefined, undefined, undefined],
   };
 }
 
@@ -687,7 +744,11 @@ export function analyse(input: CalcCase): CalcResult {
     thick = [...thick.slice(0, nFixed), ...solved];
     coeffs = [...coeffs.slice(0, nFixed), ...solved.map(() => solvedCoeffs)];
     layerIndex = [...layerIndex.slice(0, nFixed), ...solved.map(() => nFixed)];
-    method.add('Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (downward scan, then bisection)');
+    method.add(
+      c.geometry.type === 'flat'
+        ? 'Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (monotonic for a flat surface: one crossing, found by regula falsi)'
+        : 'Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (downward scan, then regula falsi in the highest failing interval)',
+    );
   }
   // Layers of zero thickness carry no resistance and have no faces to report.
   const keep = thick.map((t) => t > 0);
@@ -790,41 +851,20 @@ export function analyse(input: CalcCase): CalcResult {
     });
   }
 
-  const result: CalcResult = {
-    surfaceTemperatureC: ev.maxSurfaceC,
-    interfaceTemperaturesC: faces.outerFacesC,
-    convectionCoefficientWPerM2K: gov.hc,
-    radiationCoefficientWPerM2K: gov.hr,
-    totalThicknessM: thick.reduce((s, t) => s + t, 0),
-    warnings,
-  };
-  if (g.type === 'pipe') result.heatLossWPerM = ev.heatFlow;
-  else if (g.type === 'flat') result.heatFluxWPerM2 = ev.heatFlow;
-  else result.heatLossW = ev.heatFlow;
-  if (thicknessM !== undefined) result.thicknessM = thicknessM;
-  if (roundedLayersM !== undefined) result.roundedLayersM = roundedLayersM;
-  if (p.dewC !== undefined) result.dewPointC = p.dewC;
-  if (isVessel) {
-    result.parts = ev.models.map((m, i) => ({
-      name: ev.names[i],
-      areaM2: m.area,
-      heatLossW: m.heatFlow,
-      surfaceTemperatureC: m.surfaceC,
-    }));
-  }
+  const totalThicknessM = thick.reduce((s, t) => s + t, 0);
+  let run: { outletC: number; heatW: number } | undefined;
   if (c.run) {
     method.add('Temperature change: segment marching with local exponential decay (20 segments)');
     const r = marchRun(p, ev, c.processTemperatureC);
     if (!r.balanced) throw balanceError();
-    result.outletTemperatureC = r.outletC;
-    result.runHeatLossW = r.heatW;
+    run = r;
   }
+  let hoursToZeroC: number | null | undefined;
   if (c.stagnant) {
     method.add('Freezing time: quasi-steady lumped cooling of water and pipe, latent heat ignored');
-    const h = freezeHours(p, ev, c.processTemperatureC);
-    if (h !== null && h !== h) throw balanceError();
-    result.hoursToZeroC = h;
-    if (h === null) {
+    hoursToZeroC = freezeHours(p, ev, c.processTemperatureC);
+    if (hoursToZeroC !== null && hoursToZeroC !== hoursToZeroC) throw balanceError();
+    if (hoursToZeroC === null) {
       warnings.push({
         code: 'NO_FREEZING',
         message:
@@ -834,47 +874,47 @@ export function analyse(input: CalcCase): CalcResult {
       });
     }
   }
-  if (c.contact) {
-    result.burn = burnCheck(result.surfaceTemperatureC, c.contact);
-    method.add(`Contact burn: ${result.burn.source}`);
-  }
+  const burn = c.contact ? burnCheck(ev.maxSurfaceC, c.contact) : undefined;
+  if (burn) method.add(`Contact burn: ${burn.source}`);
   if (c.solveFor && roundedLayersM !== undefined) {
     const margin = criterionMargin(p, c.solveFor as Criterion, ev);
     if (margin < -1e-6) {
       warnings.push({
         code: 'ROUNDED_BUILD_UP_FAILS',
-        message: `The rounded build-up (${(result.totalThicknessM * 1000).toFixed(0)} mm) lies beyond the maximum thickness searched and misses the target by ${Math.abs(margin).toPrecision(3)}.`,
+        message: `The rounded build-up (${(totalThicknessM * 1000).toFixed(0)} mm) lies beyond the maximum thickness searched and misses the target by ${Math.abs(margin).toPrecision(3)}.`,
       });
     }
   }
+
+  // Keys in the contract's order (readable JSON for people and diffs), absent ones left out.
+  const result = {} as CalcResult;
+  if (g.type === 'pipe') result.heatLossWPerM = ev.heatFlow;
+  else if (g.type === 'flat') result.heatFluxWPerM2 = ev.heatFlow;
+  else result.heatLossW = ev.heatFlow;
+  result.surfaceTemperatureC = ev.maxSurfaceC;
+  result.interfaceTemperaturesC = faces.outerFacesC;
+  result.convectionCoefficientWPerM2K = gov.hc;
+  result.radiationCoefficientWPerM2K = gov.hr;
+  if (thicknessM !== undefined) result.thicknessM = thicknessM;
+  if (roundedLayersM !== undefined) result.roundedLayersM = roundedLayersM;
+  result.totalThicknessM = totalThicknessM;
+  if (p.dewC !== undefined) result.dewPointC = p.dewC;
+  if (run) {
+    result.outletTemperatureC = run.outletC;
+    result.runHeatLossW = run.heatW;
+  }
+  if (hoursToZeroC !== undefined) result.hoursToZeroC = hoursToZeroC;
+  if (burn) result.burn = burn;
+  if (isVessel) {
+    result.parts = ev.models.map((m, i) => ({
+      name: ev.names[i],
+      areaM2: m.area,
+      heatLossW: m.heatFlow,
+      surfaceTemperatureC: m.surfaceC,
+    }));
+  }
   result.method = [...method];
-  return ordered(result);
+  result.warnings = warnings;
+  return result;
 }
 
-/** Key order of a result, as the contract shows it (readable JSON for people and diffs). */
-const RESULT_KEYS: (keyof CalcResult)[] = [
-  'heatLossWPerM',
-  'heatFluxWPerM2',
-  'heatLossW',
-  'surfaceTemperatureC',
-  'interfaceTemperaturesC',
-  'convectionCoefficientWPerM2K',
-  'radiationCoefficientWPerM2K',
-  'thicknessM',
-  'roundedLayersM',
-  'totalThicknessM',
-  'dewPointC',
-  'outletTemperatureC',
-  'runHeatLossW',
-  'hoursToZeroC',
-  'burn',
-  'parts',
-  'method',
-  'warnings',
-];
-
-function ordered(r: CalcResult): CalcResult {
-  const out: Record<string, unknown> = {};
-  for (const k of RESULT_KEYS) if (r[k] !== undefined) out[k] = r[k];
-  return out as CalcResult;
-}

@@ -224,7 +224,11 @@ export function innerTemperatureFromKirchhoffDrop(
   // g(T) = K(T) − target is increasing on the bracket: g(T_out) = −ΔK, g(edge) has the sign of ΔK.
   let a = up ? outerC : edge;
   let b = up ? edge : outerC;
-  let T = outerC + dK / kOut;
+  // Start from K's second-order expansion about T_out (exact for linear k), so Newton needs a step or two.
+  let dk = 0;
+  for (let i = n - 1; i >= 1; i--) dk = dk * outerC + i * coefficients[i];
+  const D = kOut * kOut + 2 * dk * dK;
+  let T = outerC + (D > 0 ? (2 * dK) / (kOut + Math.sqrt(D)) : dK / kOut);
   if (!(T > a && T < b)) T = 0.5 * (a + b);
   for (let it = 0; it < 100; it++) {
     const f = conductivityIntegral(coefficients, T) - target;

@@ -44,7 +44,7 @@ import {
   nusseltVerticalPlateChurchillChu,
   rayleighNumberIdealGas,
 } from './natural-convection';
-import { KELVIN_OFFSET, radiationCoefficient, radiativeHeatFlux } from './radiation';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN, radiationCoefficient, radiativeHeatFlux } from './radiation';
 
 /** Natural convection: horizontal cylinder (Churchill–Chu). */
 export const NATURAL_HORIZONTAL_CYLINDER = 0;
@@ -104,6 +104,10 @@ export type SurfaceModel = {
    * then the value between the two branches that closes the balance.
    */
   atBranchChange: boolean;
+  /** Surface temperature to start the next solve from (the last solve's answer), or NaN [°C]. */
+  guessC: number;
+  /** dr/dTs near the last answer, for the first step from `guessC` (0 when unknown). */
+  slope: number;
 };
 
 const AIR = new Float64Array(3);
@@ -230,25 +234,99 @@ function closureAllowed(innerDropK: number): number {
  */
 export function solveSurface(m: SurfaceModel): void {
   m.atBranchChange = false;
-  let a = Math.min(m.processC, m.airC, m.radiantC);
-  let b = Math.max(m.processC, m.airC, m.radiantC);
-  let fa = residual(m, a);
-  let qa = lastHeatFlow;
-  let ha = lastHc;
-  let da = lastInnerDrop;
-  let ta = closureTolerance(da);
-  if (Math.abs(fa) <= ta || b - a <= 0) {
-    finish(m, a, qa, ha, fa, da);
-    return;
-  }
-  let fb = residual(m, b);
-  let qb = lastHeatFlow;
-  let hb = lastHc;
-  let db = lastInnerDrop;
-  let tb = closureTolerance(db);
-  if (Math.abs(fb) <= tb) {
-    finish(m, b, qb, hb, fb, db);
-    return;
+  const lo = Math.min(m.processC, m.airC, m.radiantC);
+  const hi = Math.max(m.processC, m.airC, m.radiantC);
+  let a = lo;
+  let b = hi;
+  let fa: number;
+  let qa: number;
+  let ha: number;
+  let da: number;
+  let ta: number;
+  let fb: number;
+  let qb: number;
+  let hb: number;
+  let db: number;
+  let tb: number;
+  let g = m.guessC;
+  if (!(g >= lo && g <= hi)) g = linearisedGuess(m, lo, hi);
+  if (g === lo || g === hi) {
+    // From an end (a bare surface starts at the process temperature): the other end brackets.
+    a = g;
+    fa = residual(m, a);
+    qa = lastHeatFlow;
+    ha = lastHc;
+    da = lastInnerDrop;
+    ta = closureTolerance(da);
+    if (Math.abs(fa) <= ta || hi - lo <= 0) {
+      finish(m, a, qa, ha, fa, da, m.slope);
+      return;
+    }
+    b = a === lo ? hi : lo;
+    fb = residual(m, b);
+    qb = lastHeatFlow;
+    hb = lastHc;
+    db = lastInnerDrop;
+    tb = closureTolerance(db);
+    if (Math.abs(fb) <= tb) {
+      finish(m, b, qb, hb, fb, db, m.slope);
+      return;
+    }
+  } else if (g > lo && g < hi) {
+    // Warm start: from the last answer (a neighbouring thickness or process temperature), step by the last
+    // slope, then by growing secant steps, until r changes sign; the root is unique, so any bracket holds it.
+    fa = residual(m, g);
+    qa = lastHeatFlow;
+    ha = lastHc;
+    da = lastInnerDrop;
+    ta = closureTolerance(da);
+    a = g;
+    if (Math.abs(fa) <= ta) {
+      finish(m, g, qa, ha, fa, da, m.slope);
+      return;
+    }
+    let step = -fa / (m.slope > 0 ? m.slope : 1);
+    for (let k = 0; ; k++) {
+      b = a + 1.05 * step;
+      if (b <= lo || b >= hi || k === 8) b = fa < 0 ? hi : lo;
+      fb = residual(m, b);
+      qb = lastHeatFlow;
+      hb = lastHc;
+      db = lastInnerDrop;
+      tb = closureTolerance(db);
+      if (Math.abs(fb) <= tb) {
+        finish(m, b, qb, hb, fb, db, slopeOf(fa, fb, a, b, m.slope));
+        return;
+      }
+      if ((fb > 0) !== (fa > 0) || b === lo || b === hi) break;
+      const secant = (-fb * (b - a)) / (fb - fa);
+      a = b;
+      fa = fb;
+      qa = qb;
+      ha = hb;
+      da = db;
+      ta = tb;
+      step = 4 * Math.abs(step) > Math.abs(secant) ? 2 * secant : 4 * step;
+    }
+  } else {
+    fa = residual(m, a);
+    qa = lastHeatFlow;
+    ha = lastHc;
+    da = lastInnerDrop;
+    ta = closureTolerance(da);
+    if (Math.abs(fa) <= ta || b - a <= 0) {
+      finish(m, a, qa, ha, fa, da, m.slope);
+      return;
+    }
+    fb = residual(m, b);
+    qb = lastHeatFlow;
+    hb = lastHc;
+    db = lastInnerDrop;
+    tb = closureTolerance(db);
+    if (Math.abs(fb) <= tb) {
+      finish(m, b, qb, hb, fb, db, m.slope);
+      return;
+    }
   }
   // Brent's zero finder (inverse quadratic interpolation, secant, bisection), after Brent (1973) ch. 4;
   // the heat flow and h_c of each iterate travel with it, so the answer needs no extra evaluation.
@@ -346,10 +424,53 @@ export function solveSurface(m: SurfaceModel): void {
     db = lastInnerDrop;
     tb = closureTolerance(db);
   }
-  finish(m, b, qb, hb, fb, db);
+  finish(m, b, qb, hb, fb, db, slopeOf(fa, fb, a, b, slopeOf(fc, fb, c, b, m.slope)));
 }
 
-function finish(m: SurfaceModel, surfaceC: number, Q: number, hc: number, closure: number, innerDropK: number): void {
+/**
+ * First surface temperature of a cold solve, from the balance linearised about the mean of the process and
+ * air temperatures: conduction with each k there, convection from the correlation there and radiation
+ * 4εσT³; sets `m.slope` to that balance's dr/dTs = 1 + R·h·A. NaN when k is not positive there.
+ */
+function linearisedGuess(m: SurfaceModel, lo: number, hi: number): number {
+  const mid = 0.5 * (m.processC + m.airC);
+  let R = m.seriesR;
+  for (let i = 0; i < m.factor.length; i++) {
+    const f = m.factor[i];
+    if (f === 0) continue;
+    const k = conductivityAt(m.coeffs[i], mid);
+    if (!(k > 0)) return NaN;
+    R += f / k;
+  }
+  if (R === 0) return m.processC;
+  const hc = convectionCoefficientOf(m, mid);
+  const TrK = m.radiantC + KELVIN_OFFSET;
+  const hr = 4 * m.emissivity * STEFAN_BOLTZMANN * TrK * TrK * TrK;
+  const h = hc + hr;
+  const surroundingsC = h > 0 ? (hc * m.airC + hr * m.radiantC) / h : m.airC;
+  const RhA = R * h * m.area;
+  m.slope = 1 + RhA;
+  const Ts = (m.processC + RhA * surroundingsC) / (1 + RhA);
+  return Ts > lo && Ts < hi ? Ts : NaN;
+}
+
+/** Secant slope of r between two iterates, or `fallback` when it is not a usable positive number. */
+function slopeOf(f1: number, f2: number, x1: number, x2: number, fallback: number): number {
+  const s = (f2 - f1) / (x2 - x1);
+  return s > 0 && s < 1e20 ? s : fallback;
+}
+
+function finish(
+  m: SurfaceModel,
+  surfaceC: number,
+  Q: number,
+  hc: number,
+  closure: number,
+  innerDropK: number,
+  slope: number,
+): void {
+  m.guessC = surfaceC;
+  m.slope = slope;
   m.surfaceC = surfaceC;
   m.heatFlow = Q;
   m.hc = hc;
@@ -393,6 +514,7 @@ function closeAcrossStep(m: SurfaceModel, surfaceC: number, q1: number, q2: numb
   const dT = surfaceC - m.airC;
   if (!(Math.abs(dT) > 0)) return;
   const qRad = radiativeHeatFlux(m.emissivity, surfaceC + KELVIN_OFFSET, m.radiantC + KELVIN_OFFSET);
+  m.guessC = surfaceC;
   m.surfaceC = surfaceC;
   m.heatFlow = Q;
   m.hc = (Q / m.area - qRad) / dT;
@@ -479,9 +601,10 @@ export function energyBalanceMismatch(m: SurfaceModel, outerFacesC: readonly num
     if (f === 0) continue;
     anyLayer = true;
     const c = m.coeffs[i];
-    const Qi = (conductivityIntegral(c, Tin) - conductivityIntegral(c, Tout)) / f;
-    const g = Math.max(Math.abs(conductivityAt(c, Tin)), Math.abs(conductivityAt(c, Tout))) / f;
-    const r = Math.abs(Qi - Q) / (ENERGY_BALANCE_TOLERANCE * Math.abs(Q) + g * BALANCE_TEMPERATURE_FLOOR_K);
+    // |Q_i − Q| ≤ tol·|Q| + (k/f)·floor, multiplied through by f so that a vanishing layer stays finite.
+    const dK = conductivityIntegral(c, Tin) - conductivityIntegral(c, Tout);
+    const kMax = Math.max(Math.abs(conductivityAt(c, Tin)), Math.abs(conductivityAt(c, Tout)));
+    const r = Math.abs(dK - Q * f) / (ENERGY_BALANCE_TOLERANCE * Math.abs(Q) * f + kMax * BALANCE_TEMPERATURE_FLOOR_K);
     if (r !== r) return NaN;
     if (r > worst) worst = r;
     Tin = Tout;

@@ -122,10 +122,12 @@ export function recomputeBalance(c: CalcCase, r: CalcResult): BalanceRecomputed 
   let Tin = c.processTemperatureC - Q * series;
   layers.forEach((l, i) => {
     const Tout = r.interfaceTemperaturesC[i];
-    const Qi = (kirchhoff(l.conductivity, Tin) - kirchhoff(l.conductivity, Tout)) / factors[i];
-    flows.push(Qi);
-    const conductance = Math.max(Math.abs(k(l.conductivity, Tin)), Math.abs(k(l.conductivity, Tout))) / factors[i];
-    worst = Math.max(worst, (Math.abs(Qi - Q) / (1e-6 * Math.abs(Q) + conductance * 1e-9)) * 1e-6);
+    const dK = kirchhoff(l.conductivity, Tin) - kirchhoff(l.conductivity, Tout);
+    flows.push(dK / factors[i]);
+    // |Q_i − Q| ≤ 1e-6·|Q| + (k/f)·1e-9 K, multiplied through by f so that a vanishing layer stays finite.
+    const kMax = Math.max(Math.abs(k(l.conductivity, Tin)), Math.abs(k(l.conductivity, Tout)));
+    const f = factors[i];
+    worst = Math.max(worst, (Math.abs(dK - Q * f) / (1e-6 * Math.abs(Q) * f + kMax * 1e-9)) * 1e-6);
     Tin = Tout;
   });
   if (layers.length === 0) {
