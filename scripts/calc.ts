@@ -51,6 +51,12 @@ async function main(): Promise<void> {
   process.stdout.write(JSON.stringify(output) + '\n');
 }
 
+// A reader that stops early (`| head`) closes the pipe: say so in one line instead of a stack trace.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  fail(e.code === 'EPIPE' ? 'standard output was closed before the results were written' : `cannot write the results (${e.message})`);
+  process.exit();
+});
+
 main().catch((e: unknown) => {
   fail(e instanceof UsageError ? e.message : `the run failed (${e instanceof Error ? e.message : String(e)})`);
 });

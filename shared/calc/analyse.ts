@@ -757,8 +757,8 @@ export function analyse(input: CalcCase): CalcResult {
   layerIndex = layerIndex.filter((_, i) => keep[i]);
 
   const ev = evaluate(p, thick, coeffs, c.processTemperatureC);
-  for (const m of ev.models) checkConductivitySpans(m, (i) => layerIndex[i]);
   const partFaces = ev.models.map(interfaceTemperatures);
+  for (let i = 0; i < ev.models.length; i++) checkConductivitySpans(ev.models[i], (j) => layerIndex[j], partFaces[i]);
   // Every result checks its own energy balance before any number leaves.
   for (let i = 0; i < ev.models.length; i++) {
     if (!(energyBalanceMismatch(ev.models[i], partFaces[i].outerFacesC) <= 1)) throw balanceError();

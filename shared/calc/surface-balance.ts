@@ -547,8 +547,12 @@ export function interfaceTemperatures(m: SurfaceModel): { outerFacesC: number[];
  * range (CONDUCTIVITY_OUT_OF_RANGE); throws CalcInputError naming `layers[i].conductivity`.
  * @internal
  */
-export function checkConductivitySpans(m: SurfaceModel, layerIndex: (i: number) => number): void {
-  const { outerFacesC, innerC } = interfaceTemperatures(m);
+export function checkConductivitySpans(
+  m: SurfaceModel,
+  layerIndex: (i: number) => number,
+  faces: { outerFacesC: number[]; innerC: number } = interfaceTemperatures(m),
+): void {
+  const { outerFacesC, innerC } = faces;
   const closure = innerC + m.heatFlow * m.seriesR - m.processC;
   if (!(Math.abs(closure) < 1e-4 * (1 + Math.abs(m.processC - m.surfaceC)))) {
     // The balance only closed against a layer that cannot carry the flow: some k(T) ≤ 0 between the process
