@@ -236,164 +236,76 @@ export function solveSurface(m: SurfaceModel): void {
   m.atBranchChange = false;
   const lo = Math.min(m.processC, m.airC, m.radiantC);
   const hi = Math.max(m.processC, m.airC, m.radiantC);
-  let a = lo;
-  let b = hi;
-  let fa: number;
-  let qa: number;
-  let ha: number;
-  let da: number;
-  let ta: number;
-  let fb: number;
-  let qb: number;
-  let hb: number;
-  let db: number;
-  let tb: number;
+  // Brent's three points; each carries its heat flow and h_c, so the answer needs no extra evaluation.
+  let a = POINT_A;
+  let b = POINT_B;
+  let c = POINT_C;
   let g = m.guessC;
   if (!(g >= lo && g <= hi)) g = linearisedGuess(m, lo, hi);
-  if (g === lo || g === hi) {
-    // From an end (a bare surface starts at the process temperature): the other end brackets.
-    a = g;
-    fa = residual(m, a);
-    qa = lastHeatFlow;
-    ha = lastHc;
-    da = lastInnerDrop;
-    ta = closureTolerance(da);
-    if (Math.abs(fa) <= ta || hi - lo <= 0) {
-      finish(m, a, qa, ha, fa, da, m.slope);
-      return;
-    }
-    b = a === lo ? hi : lo;
-    fb = residual(m, b);
-    qb = lastHeatFlow;
-    hb = lastHc;
-    db = lastInnerDrop;
-    tb = closureTolerance(db);
-    if (Math.abs(fb) <= tb) {
-      finish(m, b, qb, hb, fb, db, m.slope);
-      return;
-    }
-  } else if (g > lo && g < hi) {
+  if (g > lo && g < hi) {
     // Warm start: from the last answer (a neighbouring thickness or process temperature), step by the last
     // slope, then by growing secant steps, until r changes sign; the root is unique, so any bracket holds it.
-    fa = residual(m, g);
-    qa = lastHeatFlow;
-    ha = lastHc;
-    da = lastInnerDrop;
-    ta = closureTolerance(da);
-    a = g;
-    if (Math.abs(fa) <= ta) {
-      finish(m, g, qa, ha, fa, da, m.slope);
-      return;
-    }
-    let step = -fa / (m.slope > 0 ? m.slope : 1);
+    if (evaluateAt(m, g, a)) return finishAt(m, a, m.slope);
+    let step = -a.f / (m.slope > 0 ? m.slope : 1);
     for (let k = 0; ; k++) {
-      b = a + 1.05 * step;
-      if (b <= lo || b >= hi || k === 8) b = fa < 0 ? hi : lo;
-      fb = residual(m, b);
-      qb = lastHeatFlow;
-      hb = lastHc;
-      db = lastInnerDrop;
-      tb = closureTolerance(db);
-      if (Math.abs(fb) <= tb) {
-        finish(m, b, qb, hb, fb, db, slopeOf(fa, fb, a, b, m.slope));
-        return;
-      }
-      if ((fb > 0) !== (fa > 0) || b === lo || b === hi) break;
-      const secant = (-fb * (b - a)) / (fb - fa);
+      let x = a.x + 1.05 * step;
+      if (x <= lo || x >= hi || k === 8) x = a.f < 0 ? hi : lo;
+      if (evaluateAt(m, x, b)) return finishAt(m, b, slopeOf(a, b, m.slope));
+      if (b.f > 0 !== a.f > 0 || x === lo || x === hi) break;
+      const secant = (-b.f * (b.x - a.x)) / (b.f - a.f);
+      const t = a;
       a = b;
-      fa = fb;
-      qa = qb;
-      ha = hb;
-      da = db;
-      ta = tb;
+      b = t;
       step = 4 * Math.abs(step) > Math.abs(secant) ? 2 * secant : 4 * step;
     }
   } else {
-    fa = residual(m, a);
-    qa = lastHeatFlow;
-    ha = lastHc;
-    da = lastInnerDrop;
-    ta = closureTolerance(da);
-    if (Math.abs(fa) <= ta || b - a <= 0) {
-      finish(m, a, qa, ha, fa, da, m.slope);
-      return;
-    }
-    fb = residual(m, b);
-    qb = lastHeatFlow;
-    hb = lastHc;
-    db = lastInnerDrop;
-    tb = closureTolerance(db);
-    if (Math.abs(fb) <= tb) {
-      finish(m, b, qb, hb, fb, db, m.slope);
-      return;
-    }
+    // Cold, or from an end (a bare surface starts at the process temperature): the two ends bracket.
+    const first = g === hi ? hi : lo;
+    if (evaluateAt(m, first, a) || hi - lo <= 0) return finishAt(m, a, m.slope);
+    if (evaluateAt(m, first === lo ? hi : lo, b)) return finishAt(m, b, m.slope);
   }
-  // Brent's zero finder (inverse quadratic interpolation, secant, bisection), after Brent (1973) ch. 4;
-  // the heat flow and h_c of each iterate travel with it, so the answer needs no extra evaluation.
-  let c = a;
-  let fc = fa;
-  let qc = qa;
-  let hcc = ha;
-  let tc = ta;
-  let dc = da;
-  let d = b - a;
+  // Brent's zero finder (inverse quadratic interpolation, secant, bisection), after Brent (1973) ch. 4.
+  copyPoint(c, a);
+  let d = b.x - a.x;
   let e = d;
   for (let iter = 0; iter < 200; iter++) {
-    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
-      c = a;
-      fc = fa;
-      qc = qa;
-      hcc = ha;
-      tc = ta;
-      dc = da;
-      d = b - a;
+    if ((b.f > 0 && c.f > 0) || (b.f < 0 && c.f < 0)) {
+      copyPoint(c, a);
+      d = b.x - a.x;
       e = d;
     }
-    if (Math.abs(fc) < Math.abs(fb)) {
-      a = b;
+    if (Math.abs(c.f) < Math.abs(b.f)) {
+      // a ← b, b ← c, c ← b.
+      copyPoint(a, b);
+      const t = b;
       b = c;
-      c = a;
-      fa = fb;
-      fb = fc;
-      fc = fa;
-      qa = qb;
-      qb = qc;
-      qc = qa;
-      ha = hb;
-      hb = hcc;
-      hcc = ha;
-      ta = tb;
-      tb = tc;
-      tc = ta;
-      da = db;
-      db = dc;
-      dc = da;
+      c = t;
     }
-    if (Math.abs(fb) <= tb) break;
+    if (Math.abs(b.f) <= closureTolerance(b.drop)) break;
     // Rounding of the surface temperature (a closure of 1e-9 of the drop can need Ts to the last digits
     // when the insulation's resistance is many times the surface's).
-    const tol = 2 * Number.EPSILON * (Math.abs(b) > 1 ? Math.abs(b) : 1);
-    const xm = 0.5 * (c - b);
+    const tol = 2 * Number.EPSILON * (Math.abs(b.x) > 1 ? Math.abs(b.x) : 1);
+    const xm = 0.5 * (c.x - b.x);
     if (Math.abs(xm) <= tol) {
       // The bracket is at rounding without the closure: a step of the heat flow between b and c means a
       // step of a correlation; otherwise this is as close as rounding allows.
-      if (Math.abs(qc - qb) > 1e-9 * Math.abs(qb)) {
-        closeAcrossStep(m, b, qb, qc);
+      if (Math.abs(c.q - b.q) > 1e-9 * Math.abs(b.q)) {
+        closeAcrossStep(m, b.x, b.q, c.q);
         if (m.atBranchChange) return;
       }
       break;
     }
-    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
-      const s = fb / fa;
+    if (Math.abs(e) >= tol && Math.abs(a.f) > Math.abs(b.f)) {
+      const s = b.f / a.f;
       let p: number;
       let q: number;
-      if (a === c) {
+      if (a.x === c.x) {
         p = 2 * xm * s;
         q = 1 - s;
       } else {
-        const qq = fa / fc;
-        const r = fb / fc;
-        p = s * (2 * xm * qq * (qq - r) - (b - a) * (r - 1));
+        const qq = a.f / c.f;
+        const r = b.f / c.f;
+        p = s * (2 * xm * qq * (qq - r) - (b.x - a.x) * (r - 1));
         q = (qq - 1) * (r - 1) * (s - 1);
       }
       if (p > 0) q = -q;
@@ -411,20 +323,42 @@ export function solveSurface(m: SurfaceModel): void {
       d = xm;
       e = d;
     }
+    // a ← b, then b moves to its next iterate.
+    const t = a;
     a = b;
-    fa = fb;
-    qa = qb;
-    ha = hb;
-    ta = tb;
-    da = db;
-    b += Math.abs(d) > tol ? d : xm > 0 ? tol : -tol;
-    fb = residual(m, b);
-    qb = lastHeatFlow;
-    hb = lastHc;
-    db = lastInnerDrop;
-    tb = closureTolerance(db);
+    b = t;
+    evaluateAt(m, a.x + (Math.abs(d) > tol ? d : xm > 0 ? tol : -tol), b);
   }
-  finish(m, b, qb, hb, fb, db, slopeOf(fa, fb, a, b, slopeOf(fc, fb, c, b, m.slope)));
+  finishAt(m, b, slopeOf(a, b, slopeOf(c, b, m.slope)));
+}
+
+/** One iterate of the surface solve: Ts, the residual there, and what it produced. */
+type Iterate = { x: number; f: number; q: number; h: number; drop: number };
+
+const POINT_A: Iterate = { x: 0, f: 0, q: 0, h: 0, drop: 0 };
+const POINT_B: Iterate = { x: 0, f: 0, q: 0, h: 0, drop: 0 };
+const POINT_C: Iterate = { x: 0, f: 0, q: 0, h: 0, drop: 0 };
+
+/** Evaluates the residual at `x` into `p`; true when the closure is reached there. */
+function evaluateAt(m: SurfaceModel, x: number, p: Iterate): boolean {
+  p.x = x;
+  p.f = residual(m, x);
+  p.q = lastHeatFlow;
+  p.h = lastHc;
+  p.drop = lastInnerDrop;
+  return Math.abs(p.f) <= closureTolerance(p.drop);
+}
+
+function copyPoint(to: Iterate, from: Iterate): void {
+  to.x = from.x;
+  to.f = from.f;
+  to.q = from.q;
+  to.h = from.h;
+  to.drop = from.drop;
+}
+
+function finishAt(m: SurfaceModel, p: Iterate, slope: number): void {
+  finish(m, p.x, p.q, p.h, p.f, p.drop, slope);
 }
 
 /**
@@ -455,8 +389,8 @@ function linearisedGuess(m: SurfaceModel, lo: number, hi: number): number {
 }
 
 /** Secant slope of r between two iterates, or `fallback` when it is not a usable positive number. */
-function slopeOf(f1: number, f2: number, x1: number, x2: number, fallback: number): number {
-  const s = (f2 - f1) / (x2 - x1);
+function slopeOf(p1: Iterate, p2: Iterate, fallback: number): number {
+  const s = (p2.f - p1.f) / (p2.x - p1.x);
   return s > 0 && s < 1e20 ? s : fallback;
 }
 
