@@ -218,8 +218,11 @@ function closureAllowed(innerDropK: number): number {
 /**
  * Solves the surface balance of `m` in place and stores Ts, Q, h_c and h_r on the model.
  *
- * Brent's method on Ts over the bracket [min, max] of the process, air and radiant temperatures (see the
- * module header for why r(Ts) is increasing there). It stops when the closure — the process-side
+ * Brent's method on Ts inside [min, max] of the process, air and radiant temperatures (see the module
+ * header for why r(Ts) is increasing there). The bracket starts from the model's last answer (`guessC`,
+ * stepped by its last slope) or from the balance linearised about the mean temperature, growing until r
+ * changes sign, and falls back to [min, max]; the root is unique, so the start changes only the work,
+ * never the answer beyond the closure tolerance. It stops when the closure — the process-side
  * temperature reached by marching the surface's heat flow inward, minus the process temperature — is a
  * billionth of the drop across the innermost layer, or when the bracket has shrunk to rounding. A bracket
  * that shrinks onto a step of r(Ts) without closing means the surface sits on a step of a convection
@@ -228,7 +231,8 @@ function closureAllowed(innerDropK: number): number {
  * between the flows on either side of the step), and `atBranchChange` is set. `balanced` says whether the
  * closure was reached.
  *
- * @param m - the surface model; `surfaceC`, `heatFlow`, `hc`, `hr`, `balanced`, `atBranchChange` are overwritten
+ * @param m - the surface model; `surfaceC`, `heatFlow`, `hc`, `hr`, `balanced`, `atBranchChange`, `guessC` and
+ *   `slope` are overwritten
  * @returns nothing
  * @internal
  */
