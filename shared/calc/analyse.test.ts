@@ -2,6 +2,8 @@ import { airA4, G, SIGMA } from '../../tests/reference/air-table-a4';
 import { analyse, roundThicknessToSeries } from './analyse';
 import { CalcInputError, ImpossibleTargetError } from './errors';
 import { runCase, runCases } from './run-case';
+import { energyBalanceMismatch, solveSurface, type SurfaceModel } from './surface-balance';
+import { kirchhoffBracket } from './conduction';
 import type { CalcCase, CalcResult } from './types';
 
 const pipe = (over: Partial<CalcCase> = {}): CalcCase => ({
@@ -306,3 +308,73 @@ describe('errors and warnings', () => {
     expect(r.totalThicknessM).toBe(0);
   });
 });
+
+describe('physical bounds and checks', () => {
+  it('when a conductivity is absurdly large or small, then an error names the layer instead of 0 W/m', () => {
+    const code = (layers: CalcCase['layers'], over: Partial<CalcCase> = {}) => {
+      const o = runCase(pipe({ layers, ...over }));
+      return 'error' in o ? `${o.error.code} ${o.error.field}` : 'result';
+    };
+    expect(code([{ thicknessM: 0.05, conductivity: [1e200, 1e180] }])).toBe('CONDUCTIVITY_OUT_OF_RANGE layers[0].conductivity');
+    expect(code([{ thicknessM: 0.05, conductivity: [0.04] }, { thicknessM: 0.05, conductivity: [1e-6] }])).toBe('CONDUCTIVITY_OUT_OF_RANGE layers[1].conductivity');
+    expect(code([{ thicknessM: 0.05, conductivity: [1e200] }], { solveFor: { criterion: 'surfaceTemperature', maxC: 60 } })).toBe('CONDUCTIVITY_OUT_OF_RANGE layers[0].conductivity');
+    // Steep but physical: k reaches 700 W/(m·K) only far above anything this case sees.
+    expect(code([{ thicknessM: 0.05, conductivity: [0.04, 0, 0, 0, 0, 0, 0, 1e-18] }])).toBe('result');
+    // Above 500 W/(m·K) inside the span only: found after the solve, over the layer's own span.
+    expect(code([{ thicknessM: 0.05, conductivity: [0.04, 0, 0, 0, 0, 0, 0, 1e-14] }])).toBe('CONDUCTIVITY_OUT_OF_RANGE layers[0].conductivity');
+  });
+
+  it('when a layer is vanishingly thin or the process sits at the air temperature, then a balanced result still comes back', () => {
+    for (const c of [
+      pipe({ layers: [{ thicknessM: 5e-324, conductivity: [0.02] }, { thicknessM: 1e-17, conductivity: [0.03, 1e-4] }] }),
+      pipe({ geometry: { type: 'flat', orientation: 'faceUp', characteristicLengthM: 0.05 }, processTemperatureC: 2e-14, ambient: { airTemperatureC: 0 } }),
+      pipe({ processTemperatureC: 30, ambient: { airTemperatureC: 30 } }),
+    ]) {
+      const o = runCase(c);
+      expect('error' in o ? o.error.code : 'result').toBe('result');
+    }
+  });
+
+  it('when the emissivity is 0 or below any real finish, then the result warns that radiation is (all but) left out', () => {
+    const codes = (eps: number) => analyse(pipe({ surfaceEmissivity: eps })).warnings.map((w) => w.code);
+    expect(codes(0)).toContain('EMISSIVITY_BELOW_REAL_SURFACES');
+    expect(codes(0.01)).toContain('EMISSIVITY_BELOW_REAL_SURFACES');
+    expect(codes(0.02)).not.toContain('EMISSIVITY_BELOW_REAL_SURFACES');
+    expect(codes(0.9)).not.toContain('EMISSIVITY_BELOW_REAL_SURFACES');
+  });
+
+  it('when a solved surface is recomputed, then its balance closes; when its h_c is disturbed by 1e-5, then the check fails', () => {
+    const k = [0.03, 5e-5, 2e-7];
+    const m: SurfaceModel = {
+      coeffs: [k],
+      brackets: [kirchhoffBracket(k, 20, 400)],
+      factor: Float64Array.of(Math.log(0.1 / 0.05) / (2 * Math.PI)),
+      seriesR: 0,
+      area: 2 * Math.PI * 0.1,
+      naturalKind: 0,
+      naturalLengthM: 0.2,
+      forcedKind: 0,
+      forcedLengthM: 0.2,
+      windMS: 0,
+      emissivity: 0.5,
+      airC: 20,
+      radiantC: 20,
+      processC: 400,
+      outerDiameterM: 0.2,
+      surfaceC: 0,
+      heatFlow: 0,
+      hc: 0,
+      hr: 0,
+      balanced: false,
+      atBranchChange: false,
+      guessC: NaN,
+      slope: 0,
+    };
+    solveSurface(m);
+    expect(m.balanced).toBe(true);
+    expect(energyBalanceMismatch(m, [m.surfaceC])).toBeLessThanOrEqual(1e-2);
+    m.hc *= 1 + 1e-5;
+    expect(energyBalanceMismatch(m, [m.surfaceC])).toBeGreaterThan(1);
+  });
+});
+

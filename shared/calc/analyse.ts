@@ -14,15 +14,18 @@
 import { burnCheck } from './burn';
 import { AIR_PROPERTIES_SOURCE, AIR_TABLE_MAX_K, AIR_TABLE_MIN_K, airProperties } from './air-properties';
 import { DEW_POINT_VALID_RANGE_C, dewPointC } from './dew-point';
-import { ImpossibleTargetError } from './errors';
-import { RE_MAX_FLAT_PLATE, REPR_MIN_CYLINDER_CROSSFLOW } from './forced-convection';
+import { CONDUCTIVITY_MAX_W_PER_MK, CONDUCTIVITY_MIN_W_PER_MK, KirchhoffBracket, kirchhoffBracket } from './conduction';
+import { CalcInputError, EnergyBalanceError, ImpossibleTargetError } from './errors';
+import { RE_CRITICAL_FLAT_PLATE, RE_MAX_FLAT_PLATE, REPR_MIN_CYLINDER_CROSSFLOW } from './forced-convection';
 import {
+  RA_BRANCH_PLATE_UPPER_HOT,
   RA_RANGE_HORIZONTAL_CYLINDER,
   RA_RANGE_PLATE_LOWER_HOT,
   RA_RANGE_PLATE_UPPER_HOT,
   RA_RANGE_VERTICAL_PLATE,
   rayleighNumberIdealGas,
 } from './natural-convection';
+import { polynomialRange } from './polynomial';
 import { KELVIN_OFFSET } from './radiation';
 import {
   FORCED_CYLINDER,
@@ -33,6 +36,7 @@ import {
   NATURAL_VERTICAL_PLATE,
   SurfaceModel,
   checkConductivitySpans,
+  energyBalanceMismatch,
   interfaceTemperatures,
   solveSurface,
 } from './surface-balance';
@@ -63,6 +67,16 @@ type Prepared = {
   radiantC: number;
   windMS: number;
   dewC: number | undefined;
+  /** Every temperature of the case lies in [min, max] of the process, air and radiant temperatures [°C]. */
+  domainLoC: number;
+  domainHiC: number;
+  /** Roots of each k(T) over the domain, computed once per polynomial. */
+  brackets: Map<readonly number[], KirchhoffBracket>;
+  /**
+   * Surface models by part (pipe, wall or shell; head 1; head 2), kept so that the thickness search and the
+   * run march re-solve the same objects (no allocation) and each solve starts from the last answer.
+   */
+  models: (SurfaceModel | undefined)[];
 };
 
 /** The surfaces of a build-up before they are solved; `names` only for a vessel's parts. */
@@ -75,11 +89,39 @@ type Evaluation = Surfaces & {
   governing: number;
   maxSurfaceC: number;
   minSurfaceC: number;
+  /** Every part's balance closed. */
+  balanced: boolean;
 };
 
-function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number): SurfaceModel {
-  return {
+function bracketOf(p: Prepared, k: readonly number[]): KirchhoffBracket {
+  let b = p.brackets.get(k);
+  if (!b) {
+    b = kirchhoffBracket(k, p.domainLoC, p.domainHiC);
+    p.brackets.set(k, b);
+  }
+  return b;
+}
+
+/**
+ * The model of part `slot` for this build-up: the previous one re-initialised when it has the same layer
+ * polynomials (the thickness search), so it keeps its warm start; else a new one that inherits it.
+ */
+function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount: number, slot: number): SurfaceModel {
+  const old = p.models[slot];
+  if (old && old.coeffs === coeffs && old.factor.length === layerCount) {
+    old.seriesR = 0;
+    old.area = 1;
+    old.naturalKind = NATURAL_VERTICAL_PLATE;
+    old.naturalLengthM = 1;
+    old.forcedKind = FORCED_PLATE;
+    old.forcedLengthM = 1;
+    old.processC = processC;
+    old.outerDiameterM = 0;
+    return old;
+  }
+  const m: SurfaceModel = {
     coeffs,
+    brackets: coeffs.map((k) => bracketOf(p, k)),
     factor: new Float64Array(layerCount),
     seriesR: 0,
     area: 1,
@@ -97,7 +139,13 @@ function newModel(p: Prepared, processC: number, coeffs: number[][], layerCount:
     heatFlow: 0,
     hc: 0,
     hr: 0,
+    balanced: false,
+    atBranchChange: false,
+    guessC: old ? old.guessC : NaN,
+    slope: old ? old.slope : 0,
   };
+  p.models[slot] = m;
+  return m;
 }
 
 /** Cylindrical build-up from radius r0; Q basis per `lengthM` metres (1 for pipes). */
@@ -110,7 +158,7 @@ function cylinderModel(
   coeffs: number[][],
 ): SurfaceModel {
   const n = thicknesses.length;
-  const m = newModel(p, processC, coeffs, n);
+  const m = newModel(p, processC, coeffs, n, 0);
   let r = r0;
   for (let i = 0; i < n; i++) {
     const r2 = r + thicknesses[i];
@@ -147,7 +195,7 @@ function buildSurfaces(p: Prepared, thicknesses: readonly number[], coeffs: numb
   }
   if (g.type === 'flat') {
     const n = thicknesses.length;
-    const m = newModel(p, processC, coeffs, n);
+    const m = newModel(p, processC, coeffs, n, 0);
     for (let i = 0; i < n; i++) m.factor[i] = thicknesses[i];
     if (film) m.seriesR = 1 / film;
     m.area = 1;
@@ -176,7 +224,7 @@ function buildSurfaces(p: Prepared, thicknesses: readonly number[], coeffs: numb
   const heads: SurfaceModel[] = [];
   for (let h = 0; h < 2; h++) {
     const n = thicknesses.length;
-    const m = newModel(p, processC, coeffs, n);
+    const m = newModel(p, processC, coeffs, n, 1 + h);
     let offset = 0;
     let A1 = headArea(g.headType, D, 0);
     const A0 = A1;
@@ -212,6 +260,7 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
   let gov = 0;
   let maxT = -Infinity;
   let minT = Infinity;
+  let balanced = true;
   for (let i = 0; i < ms.length; i++) {
     if (i === 2 && horizontalVessel) {
       // Both heads of a horizontal vessel are the same vertical surface.
@@ -221,10 +270,13 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
       h2.heatFlow = h1.heatFlow;
       h2.hc = h1.hc;
       h2.hr = h1.hr;
+      h2.balanced = h1.balanced;
+      h2.atBranchChange = h1.atBranchChange;
     } else {
       solveSurface(ms[i]);
     }
     const m = ms[i];
+    if (!m.balanced) balanced = false;
     total += m.heatFlow;
     if (m.surfaceC > maxT) {
       maxT = m.surfaceC;
@@ -232,11 +284,11 @@ function evaluate(p: Prepared, thicknesses: readonly number[], coeffs: number[][
     }
     if (m.surfaceC < minT) minT = m.surfaceC;
   }
-  return { models: ms, names, heatFlow: total, governing: gov, maxSurfaceC: maxT, minSurfaceC: minT };
+  return { models: ms, names, heatFlow: total, governing: gov, maxSurfaceC: maxT, minSurfaceC: minT, balanced };
 }
 
 /** Marches the fluid along the run; the single pipe model is re-solved at each local temperature. */
-function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: number; heatW: number } {
+function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: number; heatW: number; balanced: boolean } {
   const run = p.c.run!;
   const m = ev.models[0];
   const seg = run.lengthM / RUN_SEGMENTS;
@@ -250,21 +302,27 @@ function marchRun(p: Prepared, ev: Evaluation, inletC: number): { outletC: numbe
     return T - (q * seg) / mc;
   };
   let T = inletC;
+  let balanced = true;
   for (let s = 0; s < RUN_SEGMENTS; s++) {
     m.processC = T;
     solveSurface(m);
+    balanced &&= m.balanced;
     const Tpred = step(T, m.heatFlow, T);
     const Tmid = 0.5 * (T + Tpred);
     m.processC = Tmid;
     solveSurface(m);
+    balanced &&= m.balanced;
     T = step(T, m.heatFlow, Tmid);
   }
   m.processC = inletC;
   solveSurface(m);
-  return { outletC: T, heatW: mc * (inletC - T) };
+  return { outletC: T, heatW: mc * (inletC - T), balanced };
 }
 
-/** Hours for standing water to cool from `startC` to 0 °C, or null when it never gets there. */
+/**
+ * Hours for standing water to cool from `startC` to 0 °C, or null when it never gets there; NaN when a
+ * surface balance along the way did not close.
+ */
 function freezeHours(p: Prepared, ev: Evaluation, startC: number): number | null {
   if (startC <= 0) return 0;
   if (p.airC >= 0) return null;
@@ -279,6 +337,11 @@ function freezeHours(p: Prepared, ev: Evaluation, startC: number): number | null
   for (let j = 0; j <= FREEZE_INTERVALS; j++) {
     m.processC = j * h;
     solveSurface(m);
+    if (!m.balanced) {
+      m.processC = startC;
+      solveSurface(m);
+      return NaN;
+    }
     const q = m.heatFlow;
     if (!(q > 0)) {
       m.processC = startC;
@@ -298,7 +361,10 @@ function heatLossLimit(p: Prepared, crit: Extract<Criterion, { criterion: 'heatL
   return (t === 'pipe' ? crit.maxWPerM : t === 'flat' ? crit.maxWPerM2 : crit.maxW) as number;
 }
 
-/** How far an evaluated build-up is inside the criterion (≥ 0 passes), in the criterion's own unit. */
+/**
+ * How far an evaluated build-up is inside the criterion (≥ 0 passes), in the criterion's own unit;
+ * −∞ when a surface balance of the run or the cooling water did not close.
+ */
 function criterionMargin(p: Prepared, crit: Criterion, ev: Evaluation): number {
   switch (crit.criterion) {
     case 'surfaceTemperature':
@@ -309,11 +375,11 @@ function criterionMargin(p: Prepared, crit: Criterion, ev: Evaluation): number {
       return ev.minSurfaceC - ((p.dewC as number) + crit.marginK);
     case 'temperatureChange': {
       const r = marchRun(p, ev, p.c.processTemperatureC);
-      return crit.maxChangeK - Math.abs(p.c.processTemperatureC - r.outletC);
+      return r.balanced ? crit.maxChangeK - Math.abs(p.c.processTemperatureC - r.outletC) : -Infinity;
     }
     case 'freezeTime': {
       const hrs = freezeHours(p, ev, p.c.processTemperatureC);
-      return hrs === null ? Infinity : hrs - crit.minHours;
+      return hrs === null ? Infinity : hrs !== hrs ? -Infinity : hrs - crit.minHours;
     }
   }
 }
@@ -354,34 +420,74 @@ function impossibleAdvice(crit: Criterion): string {
 function solveThickness(p: Prepared, crit: Criterion, maxT: number, baseThick: number[], coeffs: number[][]): number {
   const last = baseThick.length - 1;
   const thick = baseThick.slice();
+  let ev: Evaluation | undefined;
   const g = (t: number): number => {
     thick[last] = t;
-    return criterionMargin(p, crit, evaluate(p, thick, coeffs, p.c.processTemperatureC));
+    ev = evaluate(p, thick, coeffs, p.c.processTemperatureC);
+    // A build-up whose balance does not close is no valid answer.
+    return ev.balanced ? criterionMargin(p, crit, ev) : -Infinity;
   };
   const gMax = g(maxT);
   if (!(gMax >= 0)) {
+    // A layer that cannot carry the flow, or a balance that does not close, explains more than the target.
+    const evMax = ev as Evaluation;
+    const index = baseThick.map((_, i) => i);
+    for (const m of evMax.models) checkConductivitySpans(m, (i) => index[i]);
+    if (gMax === -Infinity) throw balanceError();
     throw new ImpossibleTargetError(
       `No thickness of the outer layer up to ${(maxT * 1000).toFixed(0)} mm gives ${describeCriterion(p, crit)}: ` +
         `at ${(maxT * 1000).toFixed(0)} mm it still misses by ${Math.abs(gMax).toPrecision(3)}. ${impossibleAdvice(crit)}`,
     );
   }
+  if (p.c.geometry.type === 'flat') {
+    // A slab has no critical thickness: adding to the last layer's resistance moves the balance
+    // monotonically (|Q| falls, Ts moves towards the surroundings), so every criterion's margin is
+    // monotonic in t and the one crossing below a passing maximum is t*; no scan is needed.
+    const g0 = g(0);
+    return g0 >= 0 ? 0 : marginCrossing(g, 0, g0, maxT, gMax);
+  }
   // Scan downward: below the critical radius a thin layer can be worse than none, so the answer is the
-  // top of the highest failing interval, not the first pass met from below.
+  // top of the highest failing interval, not the first pass met from below. A build-up whose balance does
+  // not close counts as failing, so t* never rests on one.
   let pass = maxT;
+  let gPass = gMax;
   for (let i = SCAN_POINTS - 1; i >= 0; i--) {
     const t = (maxT * i * i) / (SCAN_POINTS * SCAN_POINTS);
-    if (g(t) < 0) {
-      let fail = t;
-      while (pass - fail > THICKNESS_TOLERANCE_M) {
-        const mid = 0.5 * (pass + fail);
-        if (g(mid) >= 0) pass = mid;
-        else fail = mid;
-      }
-      return pass;
-    }
+    const gt = g(t);
+    if (gt < 0) return marginCrossing(g, t, gt, pass, gPass);
     pass = t;
+    gPass = gt;
   }
   return 0;
+}
+
+/**
+ * The thickness where the margin crosses zero between a failing `fail` (g < 0, possibly −∞) and a passing
+ * `pass` (g ≥ 0), to {@link THICKNESS_TOLERANCE_M}; returns the passing end. Regula falsi with the Illinois
+ * modification (superlinear), bisecting where g is −∞, each step kept half a tolerance inside the bracket so
+ * the bracket itself shrinks to the tolerance.
+ */
+function marginCrossing(g: (t: number) => number, fail: number, gFail: number, pass: number, gPass: number): number {
+  const inset = 0.5 * THICKNESS_TOLERANCE_M;
+  let side = 0;
+  while (pass - fail > THICKNESS_TOLERANCE_M) {
+    let t = gFail > -Infinity ? pass - (gPass * (pass - fail)) / (gPass - gFail) : 0.5 * (pass + fail);
+    if (!(t > fail + inset)) t = fail + inset;
+    if (!(t < pass - inset)) t = pass - inset;
+    const gt = g(t);
+    if (gt >= 0) {
+      pass = t;
+      gPass = gt;
+      if (side === 1) gFail *= 0.5;
+      side = 1;
+    } else {
+      fail = t;
+      gFail = gt;
+      if (side === -1) gPass *= 0.5;
+      side = -1;
+    }
+  }
+  return pass;
 }
 
 /**
@@ -493,6 +599,7 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
       }
     }
   }
+  if (m.atBranchChange) warnings.push(branchChangeWarning(m, label, filmK, air.nu, air.Pr, dT));
   if (m.windMS > 0) {
     method.add(METHOD_FORCED[m.forcedKind]);
     method.add('Combined convection: h = (h_forced³ + h_natural³)^⅓');
@@ -512,15 +619,76 @@ function diagnose(m: SurfaceModel, label: string, verticalCylinder: boolean, war
   }
 }
 
+/** Where the surface sits on a step between two published branches of a correlation. */
+function branchChangeWarning(m: SurfaceModel, label: string, filmK: number, nu: number, Pr: number, dT: number): Warning {
+  const near = (x: number, at: number) => Math.abs(x / at - 1) < 1e-3;
+  const Ra = rayleighNumberIdealGas(dT, m.naturalLengthM, filmK, nu, Pr);
+  const plumeAway =
+    (m.naturalKind === NATURAL_FACE_UP && dT >= 0) || (m.naturalKind === NATURAL_FACE_DOWN && dT < 0);
+  let where: string;
+  if (plumeAway && near(Ra, RA_BRANCH_PLATE_UPPER_HOT)) {
+    where = `Ra_L = ${fmt(Ra)}, where the McAdams branches 0.54·Ra^¼ and 0.15·Ra^⅓ of a horizontal plate meet with a step`;
+  } else if (m.windMS > 0 && m.forcedKind === FORCED_PLATE && near((m.windMS * m.forcedLengthM) / nu, RE_CRITICAL_FLAT_PLATE)) {
+    where = `Re_L = ${fmt((m.windMS * m.forcedLengthM) / nu)}, where the flat plate's laminar and mixed boundary-layer branches meet with a step`;
+  } else {
+    where = 'a point where a convection correlation steps between branches';
+  }
+  return {
+    code: 'CORRELATION_BRANCH_CHANGE',
+    message: `${label}: the surface sits at ${where}; h_c is taken between the two branches, at the value that closes the energy balance, so it is uncertain by the size of the step.`,
+  };
+}
+
+/** Lowest emissivity of a real surface that the tested domain covers (polished silver and gold, about 0.02). */
+const EMISSIVITY_LOWEST_REAL = 0.02;
+
 function prepare(c: CalcCase): Prepared {
   const a = c.ambient;
+  const airC = a.airTemperatureC;
+  const radiantC = a.radiantTemperatureC ?? a.airTemperatureC;
   return {
     c,
-    airC: a.airTemperatureC,
-    radiantC: a.radiantTemperatureC ?? a.airTemperatureC,
+    airC,
+    radiantC,
     windMS: a.windSpeedMS ?? 0,
     dewC: a.relativeHumidityPct === undefined ? undefined : dewPointC(a.airTemperatureC, a.relativeHumidityPct),
+    domainLoC: Math.min(c.processTemperatureC, airC, radiantC),
+    domainHiC: Math.max(c.processTemperatureC, airC, radiantC),
+    brackets: new Map(),
+    models: [undefined, undefined, undefined],
   };
+}
+
+function balanceError(): EnergyBalanceError {
+  return new EnergyBalanceError(
+    'The heat conducted through the layers and the heat leaving the surface by convection and radiation do not agree ' +
+      'within 1e-6 for this case, so no result is given; please report it with the input.',
+  );
+}
+
+/**
+ * Refuses a layer whose k(T) lies outside the physical range at every temperature of the case (a wrong unit
+ * or a lost exponent): no span could make it valid, and the solve would only produce a meaningless number.
+ * The exact check over each layer's own span follows the solve.
+ */
+function checkConductivityPlausible(p: Prepared): void {
+  const layers = p.c.layers;
+  for (let i = 0; i < layers.length; i++) {
+    const solved = p.c.solveFor !== undefined && i === layers.length - 1;
+    if (!solved && !(layers[i].thicknessM > 0)) continue;
+    const r = polynomialRange(layers[i].conductivity, p.domainLoC, p.domainHiC);
+    if (!(r.max >= CONDUCTIVITY_MIN_W_PER_MK && r.min <= CONDUCTIVITY_MAX_W_PER_MK)) {
+      const high = !(r.min <= CONDUCTIVITY_MAX_W_PER_MK);
+      throw new CalcInputError(
+        `layers[${i}].conductivity`,
+        `Conductivity k(T) must lie within ${CONDUCTIVITY_MIN_W_PER_MK}…${CONDUCTIVITY_MAX_W_PER_MK} W/(m·K) over the layer's ` +
+          `temperature span, but over the case's temperatures ${p.domainLoC.toFixed(1)}…${p.domainHiC.toFixed(1)} °C it ` +
+          `is ${high ? `at least ${r.min.toPrecision(3)}` : `at most ${r.max.toPrecision(3)}`} W/(m·K). ` +
+          'Check the coefficients, their unit (W/(m·K)) and their temperature unit (°C).',
+        'CONDUCTIVITY_OUT_OF_RANGE',
+      );
+    }
+  }
 }
 
 /**
@@ -550,6 +718,7 @@ function prepare(c: CalcCase): Prepared {
 export function analyse(input: CalcCase): CalcResult {
   const c = validateCase(input);
   const p = prepare(c);
+  checkConductivityPlausible(p);
   const g = c.geometry;
   const warnings: Warning[] = [];
   const method = new Set<string>();
@@ -575,7 +744,11 @@ export function analyse(input: CalcCase): CalcResult {
     thick = [...thick.slice(0, nFixed), ...solved];
     coeffs = [...coeffs.slice(0, nFixed), ...solved.map(() => solvedCoeffs)];
     layerIndex = [...layerIndex.slice(0, nFixed), ...solved.map(() => nFixed)];
-    method.add('Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (downward scan, then bisection)');
+    method.add(
+      c.geometry.type === 'flat'
+        ? 'Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (monotonic for a flat surface: one crossing, found by regula falsi)'
+        : 'Thickness: smallest t* such that every thickness from t* to the maximum meets the criterion (downward scan, then regula falsi in the highest failing interval)',
+    );
   }
   // Layers of zero thickness carry no resistance and have no faces to report.
   const keep = thick.map((t) => t > 0);
@@ -584,7 +757,12 @@ export function analyse(input: CalcCase): CalcResult {
   layerIndex = layerIndex.filter((_, i) => keep[i]);
 
   const ev = evaluate(p, thick, coeffs, c.processTemperatureC);
-  for (const m of ev.models) checkConductivitySpans(m, (i) => layerIndex[i]);
+  const partFaces = ev.models.map(interfaceTemperatures);
+  for (let i = 0; i < ev.models.length; i++) checkConductivitySpans(ev.models[i], (j) => layerIndex[j], partFaces[i]);
+  // Every result checks its own energy balance before any number leaves.
+  for (let i = 0; i < ev.models.length; i++) {
+    if (!(energyBalanceMismatch(ev.models[i], partFaces[i].outerFacesC) <= 1)) throw balanceError();
+  }
 
   method.add('Radiation: Stefan–Boltzmann law, full T⁴ exchange with enclosing surroundings (σ CODATA 2018)');
   method.add(AIR_PROPERTIES_SOURCE);
@@ -598,7 +776,6 @@ export function analyse(input: CalcCase): CalcResult {
   }
 
   const gov = ev.models[ev.governing];
-  const partFaces = ev.models.map(interfaceTemperatures);
   const faces = partFaces[ev.governing];
   // Service temperatures: the hottest and coldest face of each layer over all parts; the data range of k(T)
   // against the layer's mean temperature, as material tables give k at mean temperature.
@@ -641,6 +818,15 @@ export function analyse(input: CalcCase): CalcResult {
     }
   }
 
+  if (c.surfaceEmissivity < EMISSIVITY_LOWEST_REAL) {
+    warnings.push({
+      code: 'EMISSIVITY_BELOW_REAL_SURFACES',
+      message:
+        c.surfaceEmissivity === 0
+          ? 'Surface emissivity 0 leaves radiation out (a convection-only check). Every real surface radiates — polished metal about 0.02–0.1, painted or non-metallic finishes 0.8–0.95 — so a real hot surface loses more heat and runs cooler than this result.'
+          : `Surface emissivity ${c.surfaceEmissivity} is below that of any real finish (polished silver or gold, about 0.02); radiation is all but left out, so a real hot surface loses more heat and runs cooler than this result.`,
+    });
+  }
   const amb = c.ambient;
   if (p.dewC !== undefined) {
     method.add('Dew point: Magnus formula, Alduchov & Eskridge (1996) constants');
@@ -665,39 +851,20 @@ export function analyse(input: CalcCase): CalcResult {
     });
   }
 
-  const result: CalcResult = {
-    surfaceTemperatureC: ev.maxSurfaceC,
-    interfaceTemperaturesC: faces.outerFacesC,
-    convectionCoefficientWPerM2K: gov.hc,
-    radiationCoefficientWPerM2K: gov.hr,
-    totalThicknessM: thick.reduce((s, t) => s + t, 0),
-    warnings,
-  };
-  if (g.type === 'pipe') result.heatLossWPerM = ev.heatFlow;
-  else if (g.type === 'flat') result.heatFluxWPerM2 = ev.heatFlow;
-  else result.heatLossW = ev.heatFlow;
-  if (thicknessM !== undefined) result.thicknessM = thicknessM;
-  if (roundedLayersM !== undefined) result.roundedLayersM = roundedLayersM;
-  if (p.dewC !== undefined) result.dewPointC = p.dewC;
-  if (isVessel) {
-    result.parts = ev.models.map((m, i) => ({
-      name: ev.names[i],
-      areaM2: m.area,
-      heatLossW: m.heatFlow,
-      surfaceTemperatureC: m.surfaceC,
-    }));
-  }
+  const totalThicknessM = thick.reduce((s, t) => s + t, 0);
+  let run: { outletC: number; heatW: number } | undefined;
   if (c.run) {
     method.add('Temperature change: segment marching with local exponential decay (20 segments)');
     const r = marchRun(p, ev, c.processTemperatureC);
-    result.outletTemperatureC = r.outletC;
-    result.runHeatLossW = r.heatW;
+    if (!r.balanced) throw balanceError();
+    run = r;
   }
+  let hoursToZeroC: number | null | undefined;
   if (c.stagnant) {
     method.add('Freezing time: quasi-steady lumped cooling of water and pipe, latent heat ignored');
-    const h = freezeHours(p, ev, c.processTemperatureC);
-    result.hoursToZeroC = h;
-    if (h === null) {
+    hoursToZeroC = freezeHours(p, ev, c.processTemperatureC);
+    if (hoursToZeroC !== null && hoursToZeroC !== hoursToZeroC) throw balanceError();
+    if (hoursToZeroC === null) {
       warnings.push({
         code: 'NO_FREEZING',
         message:
@@ -707,47 +874,47 @@ export function analyse(input: CalcCase): CalcResult {
       });
     }
   }
-  if (c.contact) {
-    result.burn = burnCheck(result.surfaceTemperatureC, c.contact);
-    method.add(`Contact burn: ${result.burn.source}`);
-  }
+  const burn = c.contact ? burnCheck(ev.maxSurfaceC, c.contact) : undefined;
+  if (burn) method.add(`Contact burn: ${burn.source}`);
   if (c.solveFor && roundedLayersM !== undefined) {
     const margin = criterionMargin(p, c.solveFor as Criterion, ev);
     if (margin < -1e-6) {
       warnings.push({
         code: 'ROUNDED_BUILD_UP_FAILS',
-        message: `The rounded build-up (${(result.totalThicknessM * 1000).toFixed(0)} mm) lies beyond the maximum thickness searched and misses the target by ${Math.abs(margin).toPrecision(3)}.`,
+        message: `The rounded build-up (${(totalThicknessM * 1000).toFixed(0)} mm) lies beyond the maximum thickness searched and misses the target by ${Math.abs(margin).toPrecision(3)}.`,
       });
     }
   }
+
+  // Keys in the contract's order (readable JSON for people and diffs), absent ones left out.
+  const result = {} as CalcResult;
+  if (g.type === 'pipe') result.heatLossWPerM = ev.heatFlow;
+  else if (g.type === 'flat') result.heatFluxWPerM2 = ev.heatFlow;
+  else result.heatLossW = ev.heatFlow;
+  result.surfaceTemperatureC = ev.maxSurfaceC;
+  result.interfaceTemperaturesC = faces.outerFacesC;
+  result.convectionCoefficientWPerM2K = gov.hc;
+  result.radiationCoefficientWPerM2K = gov.hr;
+  if (thicknessM !== undefined) result.thicknessM = thicknessM;
+  if (roundedLayersM !== undefined) result.roundedLayersM = roundedLayersM;
+  result.totalThicknessM = totalThicknessM;
+  if (p.dewC !== undefined) result.dewPointC = p.dewC;
+  if (run) {
+    result.outletTemperatureC = run.outletC;
+    result.runHeatLossW = run.heatW;
+  }
+  if (hoursToZeroC !== undefined) result.hoursToZeroC = hoursToZeroC;
+  if (burn) result.burn = burn;
+  if (isVessel) {
+    result.parts = ev.models.map((m, i) => ({
+      name: ev.names[i],
+      areaM2: m.area,
+      heatLossW: m.heatFlow,
+      surfaceTemperatureC: m.surfaceC,
+    }));
+  }
   result.method = [...method];
-  return ordered(result);
+  result.warnings = warnings;
+  return result;
 }
 
-/** Key order of a result, as the contract shows it (readable JSON for people and diffs). */
-const RESULT_KEYS: (keyof CalcResult)[] = [
-  'heatLossWPerM',
-  'heatFluxWPerM2',
-  'heatLossW',
-  'surfaceTemperatureC',
-  'interfaceTemperaturesC',
-  'convectionCoefficientWPerM2K',
-  'radiationCoefficientWPerM2K',
-  'thicknessM',
-  'roundedLayersM',
-  'totalThicknessM',
-  'dewPointC',
-  'outletTemperatureC',
-  'runHeatLossW',
-  'hoursToZeroC',
-  'burn',
-  'parts',
-  'method',
-  'warnings',
-];
-
-function ordered(r: CalcResult): CalcResult {
-  const out: Record<string, unknown> = {};
-  for (const k of RESULT_KEYS) if (r[k] !== undefined) out[k] = r[k];
-  return out as CalcResult;
-}

@@ -32,3 +32,19 @@ export class ImpossibleTargetError extends Error {
     Object.setPrototypeOf(this, ImpossibleTargetError.prototype);
   }
 }
+
+/**
+ * A result that failed its own energy-balance check (conduction through the layers against convection and
+ * radiation at the surface): no number is given rather than a wrong one.
+ */
+export class EnergyBalanceError extends Error {
+  readonly code: string;
+  readonly field: string;
+  constructor(message: string, field = '(case)', code = 'ENERGY_BALANCE_FAILED') {
+    super(message);
+    this.name = 'EnergyBalanceError';
+    this.field = field;
+    this.code = code;
+    Object.setPrototypeOf(this, EnergyBalanceError.prototype);
+  }
+}

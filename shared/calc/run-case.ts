@@ -3,11 +3,17 @@
  */
 
 import { analyse } from './analyse';
-import { CalcInputError, ImpossibleTargetError } from './errors';
+import { CalcInputError, EnergyBalanceError, ImpossibleTargetError } from './errors';
 import type { CalcErrorItem, CalcOutcome } from './types';
 
+/**
+ * Most cases one batch may hold, at every entry point (the API answers more with 400 TOO_MANY_CASES, the
+ * command line exits 2): a bound on the work and the answer's size of one request.
+ */
+export const MAX_CASES = 10_000;
+
 function errorItem(e: unknown, prefix: string): CalcErrorItem {
-  if (e instanceof CalcInputError || e instanceof ImpossibleTargetError) {
+  if (e instanceof CalcInputError || e instanceof ImpossibleTargetError || e instanceof EnergyBalanceError) {
     const field = e.field === '(case)' ? prefix.replace(/\.$/, '') || '(case)' : `${prefix}${e.field}`;
     return { error: { code: e.code, field, message: e.message } };
   }
@@ -26,7 +32,7 @@ function errorItem(e: unknown, prefix: string): CalcErrorItem {
  * @param input - parsed JSON of one case
  * @returns a result, or `{ error: { code, field, message } }`; never throws
  * @remarks Codes: INVALID_INPUT, REQUIRED, OUT_OF_RANGE, UNKNOWN_FIELD, CONDUCTIVITY_NOT_POSITIVE,
- * TARGET_NOT_REACHABLE, SERIES_TOO_THIN, CALCULATION_FAILED.
+ * CONDUCTIVITY_OUT_OF_RANGE, TARGET_NOT_REACHABLE, SERIES_TOO_THIN, ENERGY_BALANCE_FAILED, CALCULATION_FAILED.
  * @example
  * runCase({ geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' }, layers: [] });
  * // → { error: { code: 'REQUIRED', field: 'processTemperatureC', message: 'processTemperatureC is required.' } }
