@@ -1,10 +1,10 @@
+import { MAX_CASES } from '../../shared/calc';
 import type { Request, Response, Router } from 'express';
 import type { Deps } from '../deps';
 import { AppError, errors } from '../errors';
 import { publicRoute, route } from '../http/routes';
 import type { RunOptions } from './calc-pool';
 
-export const MAX_CASES = 10_000;
 
 /** Arrays up to this size are answered in the interactive lane, like a single case; larger ones are batches. */
 export const INTERACTIVE_MAX_CASES = 20;
