@@ -18,14 +18,13 @@ import {
 import type { FieldErrors } from '../../calc/validation';
 import { unitOf, type Quantity, type UnitSystem } from '../../calc/units';
 import { spacing } from '../../theme';
-import { Button, Card, Text, TextField } from '../ui';
+import { Button, Card, SelectField, Text, TextField, type SelectOption } from '../ui';
 
 import { VerdictBadge } from './result-value';
 
 import { CoefficientFields } from './coefficient-fields';
 import { NumberField } from './number-field';
 import { OptionChips, type ChipOption } from './option-chips';
-import { SelectField, type SelectOption } from './select-field';
 
 export interface InputsPanelProps {
   draft: Draft;

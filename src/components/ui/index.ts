@@ -7,6 +7,7 @@ export * from './empty-state';
 export * from './icon';
 export * from './radio-keys';
 export * from './screen';
+export * from './select-field';
 export * from './text';
 export * from './text-field';
 export * from './text-link';

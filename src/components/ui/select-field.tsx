@@ -2,7 +2,9 @@ import { useCallback, useEffect, useId, useRef, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 
 import { colors, radius, spacing } from '../../theme';
-import { Text, fieldBox, focusRing } from '../ui';
+import { focusRing } from './button';
+import { Text } from './text';
+import { fieldBox } from './text-field';
 
 export type SelectOption = { value: string; label: string; detail?: string };
 
