@@ -122,7 +122,7 @@ export function QuickSizingScreen() {
     <View style={styles.stack}>
       <ResultsPanel output={output} presentation={presentation} pending={pending} signedIn={signedIn} />
       {output.kind === 'ok' ? <ChartsPanel draft={draft} output={output} system={system} wide={large} /> : null}
-      <MethodPanel result={output.kind === 'ok' ? output.result : null} />
+      <MethodPanel result={output.kind === 'ok' ? output.result : null} warnings={presentation?.warnings} />
     </View>
   );
 

@@ -104,6 +104,7 @@ describe('site form conversion', () => {
     expect(displayValue(air, 40, 'SI')).toBe('40 °C');
     expect(displayValue(air, 40, 'US')).toBe('104 °F');
     expect(displayValue(air, undefined, 'SI')).toBeNull();
+    expect(displayValue(air, -12, 'SI')).toBe('−12 °C');
     const price = BASES.find((b) => b.key === 'energy')!.fields.find((f) => f.key === 'energyPricePerKWh')!;
     expect(displayValue(price, 0.045, 'SI', 'EUR')).toBe('0.045 EUR/kWh');
     // A converted price is money per unit: to the cent, with its currency.

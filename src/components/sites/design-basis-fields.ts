@@ -111,7 +111,9 @@ export function displayValue(field: BasisField, raw: unknown, system: UnitSystem
   if (raw === undefined || raw === null || raw === '') return null;
   if (!field.quantity || typeof raw !== 'number') return String(raw);
   const unit = unitOf(field.quantity, system);
-  const text = unit.inputDecimals !== undefined ? formatInputValue(field.quantity, system, raw) : formatInputNumber(toDisplay(field.quantity, system, raw), 4);
+  const number = unit.inputDecimals !== undefined ? formatInputValue(field.quantity, system, raw) : formatInputNumber(toDisplay(field.quantity, system, raw), 4);
+  // A figure to read, not to edit: a true minus sign.
+  const text = number.replace(/^-/, '−');
   const suffix = unitSuffix(field, system, currency);
   return suffix ? `${text} ${suffix}` : text;
 }
