@@ -5,9 +5,9 @@ import { problemMessage } from '../../api/client';
 import { useAddSiteMember, useRemoveSiteMember } from '../../api/sites';
 import { useTeam } from '../../api/team';
 import { roleLabels, type Member, type SiteDetail, type SiteMember } from '../../api/types';
-import { colors, radius, spacing } from '../../theme';
+import { spacing } from '../../theme';
 import { Loading } from '../common/query-state';
-import { Banner, Button, Card, SelectField, Text, type SelectOption } from '../ui';
+import { Banner, Button, Card, SelectField, Text, personRows, type SelectOption } from '../ui';
 
 /** People who may be added: team members not on the site yet, contractors first (they are the ones it changes). */
 export function addableMembers(team: readonly Member[], onSite: readonly SiteMember[]): Member[] {
@@ -144,11 +144,6 @@ export function SitePeoplePanel({ site }: { site: SiteDetail }) {
 }
 
 const styles = StyleSheet.create({
-  list: { gap: 0 },
-  row: { paddingVertical: spacing.md, borderTopWidth: 1, borderTopColor: colors.border, gap: spacing.sm },
-  rowHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.sm },
-  who: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: spacing.xxs },
-  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  confirm: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, backgroundColor: colors.cautionSoft },
+  ...personRows,
   add: { gap: spacing.sm },
 });

@@ -6,7 +6,7 @@ import { useChangeRole, useRemoveMember } from '../../api/team';
 import { ROLES, roleLabels, type Member, type Role } from '../../api/types';
 import { colors, radius, spacing } from '../../theme';
 import { formatDate } from '../common/format';
-import { Banner, Button, Card, ChoiceGroup, Text } from '../ui';
+import { Banner, Button, Card, ChoiceGroup, Text, personRows } from '../ui';
 
 import { roleAbilities, roleLimits } from './role-abilities';
 
@@ -168,12 +168,8 @@ export function MemberList({ members, canManage, selfId, onRemoved }: MemberList
 }
 
 const styles = StyleSheet.create({
-  list: { gap: 0 },
-  row: { paddingVertical: spacing.md, borderTopWidth: 1, borderTopColor: colors.border, gap: spacing.sm },
-  rowHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.sm },
-  who: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: spacing.xxs },
+  ...personRows,
+  rowActions: personRows.actions,
   roleTag: { paddingHorizontal: spacing.sm, paddingVertical: spacing.xxs, borderRadius: radius.pill, backgroundColor: colors.surfaceSunk },
-  rowActions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
   edit: { gap: spacing.sm },
-  confirm: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, backgroundColor: colors.cautionSoft },
 });

@@ -5,6 +5,7 @@ export * from './card';
 export * from './choice-group';
 export * from './empty-state';
 export * from './icon';
+export * from './person-rows';
 export * from './radio-keys';
 export * from './screen';
 export * from './select-field';
