@@ -20,15 +20,22 @@ const energy = (/** @type {number} */ airC, /** @type {number} */ wind) => ({
   heatSourceEfficiency: 0.85,
   co2KgPerKWh: 0.202,
   co2Basis: 'Natural gas, combustion only (common practice factor)',
+  // Cold service: heat gains are removed by the chillers, driven by grid electricity (invented demo figures).
+  coolingCop: 3.5,
+  electricityPricePerKWh: 0.19,
+  electricityCo2KgPerKWh: 0.35,
+  electricityCo2Basis: 'Grid electricity, location-based average (demo figure)',
 });
 const condensation = (/** @type {number} */ airC, /** @type {number} */ rh) => ({ airTemperatureC: airC, relativeHumidityPct: rh, marginK: 1 });
+/** Coldest design conditions (invented): indoor sites in an unheated building during a cold spell. */
+const winter = (/** @type {number} */ airC, /** @type {number} */ wind) => ({ airTemperatureC: airC, windSpeedMS: wind });
 
 const SITES = [
-  { name: 'Boiler house', description: 'Two fire-tube steam boilers, 12 bar(g) saturated steam headers and condensate return.', indoor: true },
-  { name: 'Thermal-oil loop', description: 'Hot-oil heater and distribution to the reactor jackets, 290 °C supply.', indoor: false },
-  { name: 'Tank farm', description: 'Heated storage tanks for heavy fuel oil and bitumen, with tracing.', indoor: false },
-  { name: 'Process unit 2', description: 'Distillation train and reboilers, mixed hot and cold service.', indoor: false },
-  { name: 'Chilled water', description: 'Chillers and the 6/12 °C chilled-water distribution to the control buildings.', indoor: true },
+  { name: 'Boiler house', description: 'Two fire-tube steam boilers, 12 bar(g) saturated steam headers and condensate return.', indoor: true, winter: winter(-2, 0) },
+  { name: 'Thermal-oil loop', description: 'Hot-oil heater and distribution to the reactor jackets, 290 °C supply.', indoor: false, winter: winter(-12, 6) },
+  { name: 'Tank farm', description: 'Heated storage tanks for heavy fuel oil and bitumen, with tracing.', indoor: false, winter: winter(-14, 8) },
+  { name: 'Process unit 2', description: 'Distillation train and reboilers, mixed hot and cold service.', indoor: false, winter: winter(-12, 5) },
+  { name: 'Chilled water', description: 'Chillers and the 6/12 °C chilled-water distribution to the control buildings.', indoor: true, winter: winter(-3, 0) },
 ];
 
 /** @param {import('knex').Knex} knex */
@@ -60,6 +67,7 @@ exports.seed = async function seed(knex) {
         touch: touch(s.indoor ? 40 : 35),
         energy: energy(s.indoor ? 20 : 9, s.indoor ? 0 : 3.5),
         condensation: condensation(s.indoor ? 28 : 30, s.indoor ? 70 : 85),
+        winter: s.winter,
       }),
       created_by: ids.engineer,
     });

@@ -8,11 +8,16 @@ import { findMember } from '../team/teams.repository';
 import { refreshSiteInputHashes } from '../sizing/sizing-context';
 import * as repo from './sites.repository';
 
-/** Defaults a new site starts from (SI, °C); every value is editable. */
+/**
+ * Defaults a new site starts from (SI, °C); every value is editable. They are examples, not any site's data:
+ * the winter basis in particular (−10 °C, 5 m/s) is a placeholder to replace with the site's own coldest
+ * design conditions (local climate records or the plant's specification).
+ */
 export const DEFAULT_DESIGN_BASES: DesignBases = {
   touch: { airTemperatureC: 35, windSpeedMS: 0, surfaceEmissivity: 0.9, contactSeconds: 5 },
   energy: { airTemperatureC: 10, windSpeedMS: 3, operatingHoursPerYear: 8000, heatSourceEfficiency: 0.85 },
   condensation: { airTemperatureC: 30, relativeHumidityPct: 80, marginK: 1 },
+  winter: { airTemperatureC: -10, windSpeedMS: 5 },
 };
 
 /** Contractors see only the sites they were invited to. */

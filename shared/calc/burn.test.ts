@@ -1,7 +1,15 @@
 import fc from 'fast-check';
 
 import { CalcInputError } from './errors';
-import { burnCheck, burnThresholdC, burnThresholdWithSource, CONTACT_MATERIALS, ISO_13732_1_BURN_THRESHOLDS } from './burn';
+import {
+  burnCheck,
+  burnThresholdC,
+  burnThresholdWithSource,
+  COLD_CONTACT_WARNING_C,
+  CONTACT_MATERIALS,
+  ISO_13732_1_BURN_THRESHOLDS,
+  touchSafetyVerdict,
+} from './burn';
 import type { Contact, ContactMaterial } from './types';
 
 describe('burn thresholds', () => {
@@ -74,5 +82,83 @@ describe('recalled burn data, pinned and labelled', () => {
     const result = burnCheck(65, { material: 'uncoatedMetal' });
     expect(result.verdict).toBe('aboveThreshold');
     expect(result.thresholdC).toBe(60);
+  });
+});
+
+describe('one touch-safety verdict', () => {
+  const metal5s = { material: 'uncoatedMetal', seconds: 5 } as const;
+  const threshold5s = 65 - 10 * Math.log10(5); // ≈ 58.01 °C, log-time interpolation between 1 s and 10 s
+
+  it('when a stated limit is looser than the burn threshold, then the threshold governs and the verdict follows it alone', () => {
+    const v = touchSafetyVerdict({ surfaceTemperatureC: 59, airTemperatureC: 25, limitC: 60, contact: metal5s });
+    expect(v).toMatchObject({ verdict: 'fail', regime: 'hot', governs: 'burnThreshold', comparison: 'above' });
+    expect(v.limitC).toBeCloseTo(threshold5s, 9);
+    expect(v.source).toMatch(/ISO 13732-1/);
+  });
+
+  it('when a stated limit is stricter, then it governs, and a surface at it passes', () => {
+    const v = touchSafetyVerdict({ surfaceTemperatureC: 55.04, airTemperatureC: 25, limitC: 55, limitSource: 'the site\u2019s touch limit', contact: metal5s });
+    expect(v).toMatchObject({ verdict: 'pass', governs: 'touchLimit', comparison: 'at', limitC: 55, maxPassingSurfaceC: 55 });
+    expect(v.source).toMatch(/^the site’s touch limit, stricter than the burn threshold/);
+    expect(touchSafetyVerdict({ surfaceTemperatureC: 55.06, airTemperatureC: 25, limitC: 55, contact: metal5s }).verdict).toBe('fail');
+  });
+
+  it('when the surface and the threshold show the same figure, then it is at the threshold (a fail), never above or below it', () => {
+    // 58.03 and 58.01 both show as 58.0.
+    const v = touchSafetyVerdict({ surfaceTemperatureC: 58.03, airTemperatureC: 25, contact: metal5s });
+    expect(v).toMatchObject({ verdict: 'fail', comparison: 'at', governs: 'burnThreshold' });
+    const below = touchSafetyVerdict({ surfaceTemperatureC: 57.96, airTemperatureC: 25, contact: metal5s });
+    expect(below).toMatchObject({ verdict: 'fail', comparison: 'at' });
+    expect(touchSafetyVerdict({ surfaceTemperatureC: 57.94, airTemperatureC: 25, contact: metal5s }).verdict).toBe('pass');
+  });
+
+  it('when a stated limit shows the same figure as the threshold, then the threshold governs (a burn begins at it)', () => {
+    const v = touchSafetyVerdict({ surfaceTemperatureC: 40, airTemperatureC: 25, limitC: 58, contact: metal5s });
+    expect(v.governs).toBe('burnThreshold');
+  });
+
+  it('when shown in whole degrees or in °F, then the comparison is made at that precision', () => {
+    // 58.4 °C shows as 58 °C, the threshold 58.01 °C as 58 °C: at the threshold.
+    expect(touchSafetyVerdict({ surfaceTemperatureC: 58.4, airTemperatureC: 25, contact: metal5s, precision: { decimals: 0 } }).comparison).toBe('at');
+    // 136.4 °F against 136.4 °F (58.01 °C): at; 57.9 °C = 136.2 °F: below.
+    expect(touchSafetyVerdict({ surfaceTemperatureC: 58.0, airTemperatureC: 25, contact: metal5s, precision: { decimals: 1, scale: 'F' } }).comparison).toBe('at');
+    expect(touchSafetyVerdict({ surfaceTemperatureC: 57.9, airTemperatureC: 25, contact: metal5s, precision: { decimals: 1, scale: 'F' } }).comparison).toBe('below');
+  });
+
+  it('when any hot surface is judged, then a surface at the highest passing temperature passes and one a display step hotter does not', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...CONTACT_MATERIALS),
+        fc.double({ min: 1, max: 30000, noNaN: true }),
+        fc.option(fc.double({ min: 30, max: 120, noNaN: true }), { nil: undefined }),
+        fc.constantFrom('C' as const, 'F' as const),
+        fc.constantFrom(0, 1),
+        (material, seconds, limitC, scale, decimals) => {
+          const base = { airTemperatureC: 20, limitC, contact: { material, seconds }, precision: { decimals, scale } };
+          const top = touchSafetyVerdict({ ...base, surfaceTemperatureC: 25 }).maxPassingSurfaceC!;
+          expect(touchSafetyVerdict({ ...base, surfaceTemperatureC: Math.max(top, 20) }).verdict).toBe('pass');
+          const step = (scale === 'F' ? 5 / 9 : 1) * 10 ** -decimals;
+          expect(touchSafetyVerdict({ ...base, surfaceTemperatureC: top + 1.01 * step }).verdict).toBe('fail');
+        },
+      ),
+    );
+  });
+
+  it('when the surface is colder than the air, then cold contact governs: no burn verdict, a caution below the frostbite onset', () => {
+    const chilled = touchSafetyVerdict({ surfaceTemperatureC: 5, airTemperatureC: 25, limitC: 55, contact: metal5s });
+    expect(chilled).toMatchObject({ verdict: 'pass', regime: 'cold', governs: 'coldContact', burnThresholdC: null, maxPassingSurfaceC: null });
+    expect(chilled.source).toMatch(/ISO 13732-3/);
+    expect(chilled.source).not.toMatch(/ISO 13732-1/);
+    const frozen = touchSafetyVerdict({ surfaceTemperatureC: -12, airTemperatureC: 20, contact: metal5s });
+    expect(frozen).toMatchObject({ verdict: 'caution', comparison: 'below', limitC: COLD_CONTACT_WARNING_C.uncoatedMetal });
+    // Common practice warns below about −10 °C for metal; the stored onset is not colder than that.
+    expect(COLD_CONTACT_WARNING_C.uncoatedMetal).toBeGreaterThanOrEqual(-10);
+  });
+
+  it('when input is bad, then a CalcInputError names the field', () => {
+    expect(() => touchSafetyVerdict({ surfaceTemperatureC: Number.NaN, airTemperatureC: 20, contact: metal5s })).toThrow(/surfaceTemperatureC/);
+    expect(() => touchSafetyVerdict({ surfaceTemperatureC: 50, airTemperatureC: 20, limitC: Number.POSITIVE_INFINITY, contact: metal5s })).toThrow(/limitC/);
+    expect(() => touchSafetyVerdict({ surfaceTemperatureC: 50, airTemperatureC: 20, contact: { material: 'tin' as never } })).toThrow(/contact.material/);
+    expect(() => touchSafetyVerdict({ surfaceTemperatureC: 50, airTemperatureC: 20, contact: metal5s, precision: { decimals: 1.5 } })).toThrow(CalcInputError);
   });
 });

@@ -298,3 +298,178 @@ export const COLD_CONTACT_NOTE =
   'Cold surfaces are assessed under ISO 13732-3 (cold surfaces), not by this hot-surface check. For a 10 s ' +
   'fingertip contact ISO 13732-3 gives frostbite at about −7 °C on aluminium and −12.5 °C on steel (numbness at ' +
   '+3 °C and −1 °C); longer contact brings the risk closer to 0 °C (from memory).';
+
+// ---------------------------------------------------------------------------------------------------------
+// One verdict for touch safety
+
+/**
+ * Surface temperature below which a cold surface earns a contact warning [°C], by contact material.
+ *
+ * @remarks Common practice warns about cold metal below roughly −10 °C. ISO 13732-3:2005 (as quoted in
+ * {@link COLD_CONTACT_NOTE}, confirmed against the BAuA selection) puts frostbite for a 10 s fingertip contact at
+ * −7.0 °C on aluminium and −12.5 °C on steel; as on the hot side, this module takes the conservative edge, the
+ * aluminium figure, for bare and for coated metal (the coating being unknown). For ceramic, glass, stone, plastic
+ * and wood no figure is stored here: they draw heat from the skin more slowly than metal, so the metal value is a
+ * conservative screen for them too (our assumption).
+ */
+export const COLD_CONTACT_WARNING_C: Readonly<Record<ContactMaterial, number>> = {
+  uncoatedMetal: -7,
+  coatedMetal: -7,
+  ceramicGlassStone: -7,
+  plastic: -7,
+  wood: -7,
+};
+
+const COLD_CONTACT_SOURCE =
+  'cold contact: ISO 13732-3:2005 frostbite onset for a 10 s fingertip contact, −7.0 °C on aluminium (the conservative ' +
+  'edge of the published metals; steel −12.5 °C), confirmed against the BAuA selection from DIN EN ISO 13732-3; used for ' +
+  'non-metals as well, which draw heat more slowly (our assumption); hot-surface burn thresholds do not apply';
+
+/** The temperature scale and decimals a temperature is shown with; verdicts compare at this precision. */
+export type TemperaturePrecision = {
+  /** Decimals shown (1 for results, 0 for lists). */
+  decimals: number;
+  /** Scale shown: degrees Celsius (default) or Fahrenheit. */
+  scale?: 'C' | 'F';
+};
+
+/** Where the limit of a touch-safety verdict comes from. */
+export type TouchSafetyGovernor = 'touchLimit' | 'burnThreshold' | 'coldContact';
+
+/** Inputs of {@link touchSafetyVerdict}, all SI with temperatures in °C. */
+export type TouchSafetyInput = {
+  /** Outer surface temperature [°C]. */
+  surfaceTemperatureC: number;
+  /** Air around the surface [°C]: a surface colder than the air is on cold service and is judged as cold contact. */
+  airTemperatureC: number;
+  /** A stated highest surface temperature (a site's or a sizing's touch limit) [°C]; omitted → the burn threshold alone. */
+  limitC?: number;
+  /** Who stated `limitC`, for the source text (e.g. "the site's touch limit"); default "the stated touch limit". */
+  limitSource?: string;
+  /** Surface material and contact time (omitted time → ASTM C1055 5 s basis). */
+  contact: ContactInput;
+  /** Precision the temperatures are shown at; default 0.1 °C. */
+  precision?: TemperaturePrecision;
+};
+
+/** One verdict for touch safety, with the one limit it was judged against. */
+export type TouchSafetyVerdict = {
+  /** `pass`, `fail` (a hot surface at or above its limit) or `caution` (a cold surface below the frostbite onset). */
+  verdict: 'pass' | 'caution' | 'fail';
+  /** `hot` when the surface is at or above the air temperature, else `cold`. */
+  regime: 'hot' | 'cold';
+  /** Which limit governs: the stated touch limit, the burn threshold for the contact, or cold contact. */
+  governs: TouchSafetyGovernor;
+  /** The governing limit [°C]. */
+  limitC: number;
+  /** The surface against the governing limit, compared at the shown precision. */
+  comparison: 'below' | 'at' | 'above';
+  /** The burn threshold for the contact material and time (hot regime), else null [°C]. */
+  burnThresholdC: number | null;
+  /**
+   * Highest surface temperature that passes at the shown precision (hot regime) [°C]: a sizing solved for a surface
+   * at most this value gets a passing verdict. Null in the cold regime.
+   */
+  maxPassingSurfaceC: number | null;
+  /** Basis of the governing limit. */
+  source: string;
+};
+
+function shownValue(temperatureC: number, p: Required<TemperaturePrecision>): number {
+  const v = p.scale === 'F' ? (temperatureC * 9) / 5 + 32 : temperatureC;
+  return Number(v.toFixed(p.decimals));
+}
+
+function fromShownValue(shown: number, p: Required<TemperaturePrecision>): number {
+  return p.scale === 'F' ? ((shown - 32) * 5) / 9 : shown;
+}
+
+function compareShown(a: number, b: number): 'below' | 'at' | 'above' {
+  return a < b ? 'below' : a > b ? 'above' : 'at';
+}
+
+/**
+ * The single touch-safety verdict of a surface: which limit governs, and whether the surface meets it as shown.
+ *
+ * Hot regime (surface ≥ air): the governing limit is the stricter of the stated touch limit L and the burn threshold
+ * θ(material, time). A touch limit is a highest allowed temperature (pass when T_s ≤ L as shown); a burn threshold is
+ * where a burn begins (pass when T_s < θ as shown), so with L and θ shown equal the threshold governs. Cold regime
+ * (surface < air): the cold-contact warning temperature governs ({@link COLD_CONTACT_WARNING_C}); the verdict is
+ * `caution` below it, else `pass`; hot-surface thresholds and L do not apply.
+ *
+ * @param input.surfaceTemperatureC - surface temperature [°C]
+ * @param input.airTemperatureC - air temperature [°C]
+ * @param input.limitC - stated touch limit [°C], optional
+ * @param input.contact - surface material and contact time [s]
+ * @param input.precision - decimals and scale the figures are shown with (default 1 decimal, °C)
+ * @returns verdict, regime, governing limit [°C] and its source, comparison as shown, burn threshold [°C], and the
+ *   highest passing surface temperature [°C] for a solver
+ * @remarks Comparing at the shown precision keeps the words in step with the figures: 58.0 °C against a 58.0 °C
+ *   threshold reads "at the threshold" (a fail), never "above" it. A screen, not a risk assessment; the plant's
+ *   specification, local codes and a competent engineer decide what is safe to touch.
+ * @example touchSafetyVerdict({ surfaceTemperatureC: 58.03, airTemperatureC: 25, limitC: 60, contact: { material: 'uncoatedMetal', seconds: 5 } })
+ *   // → { verdict: 'fail', governs: 'burnThreshold', comparison: 'at', limitC: ≈58.01, … } (ISO 13732-1, 5 s, metal)
+ * References: 1. ISO 13732-1:2006. 2. ASTM C1055-20. 3. ISO 13732-3:2005.
+ */
+export function touchSafetyVerdict(input: TouchSafetyInput): TouchSafetyVerdict {
+  if (input === null || typeof input !== 'object') throw new CalcInputError('(input)', 'touchSafetyVerdict needs an object');
+  const { surfaceTemperatureC: s, airTemperatureC: air, limitC, contact } = input;
+  if (typeof s !== 'number' || !Number.isFinite(s)) throw new CalcInputError('surfaceTemperatureC', 'surfaceTemperatureC must be a finite number');
+  if (typeof air !== 'number' || !Number.isFinite(air)) throw new CalcInputError('airTemperatureC', 'airTemperatureC must be a finite number');
+  if (limitC !== undefined && (typeof limitC !== 'number' || !Number.isFinite(limitC))) {
+    throw new CalcInputError('limitC', 'limitC must be a finite number when given');
+  }
+  if (contact === null || typeof contact !== 'object') throw new CalcInputError('contact', 'contact must be an object with material and seconds');
+  checkMaterial(contact.material, 'contact.material');
+  const decimals = input.precision?.decimals ?? 1;
+  if (!Number.isInteger(decimals) || decimals < 0 || decimals > 6) {
+    throw new CalcInputError('precision.decimals', 'precision.decimals must be an integer from 0 to 6');
+  }
+  const scale = input.precision?.scale ?? 'C';
+  if (scale !== 'C' && scale !== 'F') throw new CalcInputError('precision.scale', 'precision.scale must be C or F');
+  const p: Required<TemperaturePrecision> = { decimals, scale };
+  const shownSurface = shownValue(s, p);
+
+  if (s < air) {
+    const cold = COLD_CONTACT_WARNING_C[contact.material];
+    const comparison = compareShown(shownSurface, shownValue(cold, p));
+    return {
+      verdict: comparison === 'below' ? 'caution' : 'pass',
+      regime: 'cold',
+      governs: 'coldContact',
+      limitC: cold,
+      comparison,
+      burnThresholdC: null,
+      maxPassingSurfaceC: null,
+      source: COLD_CONTACT_SOURCE,
+    };
+  }
+
+  const burn = burnThresholdWithSource(contact.material, contact.seconds);
+  const shownBurn = shownValue(burn.thresholdC, p);
+  const step = 10 ** -decimals;
+  if (limitC !== undefined && shownValue(limitC, p) < shownBurn) {
+    const comparison = compareShown(shownSurface, shownValue(limitC, p));
+    return {
+      verdict: comparison === 'above' ? 'fail' : 'pass',
+      regime: 'hot',
+      governs: 'touchLimit',
+      limitC,
+      comparison,
+      burnThresholdC: burn.thresholdC,
+      maxPassingSurfaceC: limitC,
+      source: `${input.limitSource ?? 'the stated touch limit'}, stricter than the burn threshold (${burn.source})`,
+    };
+  }
+  const comparison = compareShown(shownSurface, shownBurn);
+  return {
+    verdict: comparison === 'below' ? 'pass' : 'fail',
+    regime: 'hot',
+    governs: 'burnThreshold',
+    limitC: burn.thresholdC,
+    comparison,
+    burnThresholdC: burn.thresholdC,
+    maxPassingSurfaceC: fromShownValue(Number((shownBurn - step).toFixed(decimals)), p),
+    source: burn.source,
+  };
+}

@@ -2,10 +2,13 @@ import fc from 'fast-check';
 
 import {
   annualEnergyAssessment,
+  chillerElectricityKWh,
   componentsEquivalentLengthM,
   energyCost,
   EXAMPLE_NATURAL_GAS_EMISSION_FACTOR,
   lineHeatFlowW,
+  savingVersusBare,
+  type CoolingBasis,
   type EnergyBasis,
 } from './energy';
 
@@ -39,6 +42,55 @@ describe('energy assessment', () => {
 
   it('when the hours exceed a leap year, then it throws with the field', () => {
     expect(() => annualEnergyAssessment(1, { ...basis, operatingHoursPerYear: 9000 })).toThrow(/operatingHoursPerYear/);
+  });
+});
+
+const cooling: CoolingBasis = {
+  coefficientOfPerformance: 4,
+  electricityPrice: { amount: '0.2', per: 'kWh' },
+  electricityEmissionFactor: { kgCo2PerKWh: 0.3, basis: 'example grid factor' },
+};
+
+describe('a heat gain on cold service', () => {
+  it('when a gain is costed with a cooling basis, then a chiller removes it: electricity at COP, electricity price and factor', () => {
+    // 1 kW gain for 8760 h = 8760 kWh of heat; ÷ COP 4 = 2190 kWh of electricity; × 0.2 = 438.00; × 0.3 = 657 kg.
+    const a = annualEnergyAssessment(-1000, { ...basis, cooling });
+    expect(a.service).toBe('cooling');
+    expect(a.heat.kWh).toBeCloseTo(8760, 9);
+    expect(a.purchasedKWh).toBeCloseTo(2190, 9);
+    expect(a.cost.text).toBe('438.00');
+    expect(a.co2.kg).toBeCloseTo(657, 9);
+    expect(a.co2.basis).toBe('example grid factor');
+  });
+
+  it('when a loss is costed on a basis that also has cooling, then the heat source pays for it as before', () => {
+    const a = annualEnergyAssessment(1000, { ...basis, cooling });
+    expect(a).toEqual(annualEnergyAssessment(1000, basis));
+    expect(a.service).toBe('heating');
+  });
+
+  it('when a gain has no cooling basis, then it is charged to the heat source as before', () => {
+    expect(annualEnergyAssessment(-1000, basis).purchasedKWh).toBeCloseTo(8760 / 0.9, 9);
+    expect(annualEnergyAssessment(-1000, basis).service).toBe('heating');
+  });
+
+  it('when insulation halves a gain, then the saving is half the chiller electricity and cost', () => {
+    const s = savingVersusBare(-1000, -500, { ...basis, cooling });
+    expect(s.purchasedKWhSaved).toBeCloseTo(1095, 9);
+    expect(s.costSaved.text).toBe('219.00');
+    expect(s.co2KgSaved).toBeCloseTo(328.5, 9);
+  });
+
+  it('when the COP grows, then the electricity never rises', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 1e7, noNaN: true }), fc.double({ min: 0.3, max: 15, noNaN: true }), fc.double({ min: 1, max: 3, noNaN: true }), (e, cop, f) => {
+        expect(chillerElectricityKWh(e, cop * f)).toBeLessThanOrEqual(chillerElectricityKWh(e, cop) + 1e-9);
+      }),
+    );
+  });
+
+  it('when the COP is not positive, then it throws naming the field', () => {
+    expect(() => annualEnergyAssessment(-1, { ...basis, cooling: { ...cooling, coefficientOfPerformance: 0 } })).toThrow(/cooling.coefficientOfPerformance/);
   });
 });
 

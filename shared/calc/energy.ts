@@ -4,8 +4,9 @@
  *
  * @remarks
  * Heat flow keeps its sign convention (positive = loss to the surroundings, negative = gain on a cold service);
- * energy, cost and CO₂ are computed on its magnitude, because a gain costs refrigeration just as a loss costs
- * fuel. Money is computed with decimal arithmetic and rounded once, at the end, to the currency's minor unit.
+ * energy is computed on its magnitude. A loss is made up by the heat source (fuel, its efficiency and emission
+ * factor); a gain is removed by a chiller when a cooling basis is given (electricity, the chiller's coefficient of
+ * performance and electricity's emission factor). Money is computed with decimal arithmetic and rounded once, at the end, to the currency's minor unit.
  */
 
 import Decimal from 'decimal.js';
@@ -179,35 +180,92 @@ export function annualCo2(purchasedEnergyKWh: number, factor: EmissionFactor): A
   return { kg, tonnes: kg / 1000, basis: factor.basis };
 }
 
-/** The energy basis of a site: hours, heat-source efficiency, price and emission factor. */
+/**
+ * How a heat gain on cold service is paid for: a chiller (or refrigeration plant) removes it, driven by electricity.
+ */
+export type CoolingBasis = {
+  /** Coefficient of performance: heat removed per unit of electricity [–], > 0 (electric chillers typically 2.5–6). */
+  coefficientOfPerformance: number;
+  /** Price of electricity. */
+  electricityPrice: EnergyPrice;
+  /** Emission factor of electricity [kg CO₂/kWh of electricity], with its stated basis. */
+  electricityEmissionFactor: EmissionFactor;
+};
+
+/**
+ * The energy basis of a site: hours, heat-source efficiency, price and emission factor, and optionally how a heat
+ * gain is removed on cold service.
+ */
 export type EnergyBasis = {
   operatingHoursPerYear: number;
   heatSourceEfficiency: number;
   price: EnergyPrice;
   emissionFactor: EmissionFactor;
+  /** Cold service: a heat gain is costed with the chiller's COP and electricity's price and CO₂ factor. */
+  cooling?: CoolingBasis;
 };
 
 /** Annual consequences of one heat flow. */
 export type AnnualEnergyAssessment = {
+  /**
+   * `cooling` when a heat gain was costed as electricity for a chiller (negative heat flow and a cooling basis);
+   * `heating` when the heat flow was costed as energy for the heat source.
+   */
+  service: 'heating' | 'cooling';
   heat: AnnualEnergy;
-  /** Purchased energy [kWh]. */
+  /** Purchased energy [kWh]: fuel for the heat source, or electricity for the chiller. */
   purchasedKWh: number;
   cost: MoneyAmount;
   co2: AnnualCo2;
 };
 
 /**
+ * Electricity a chiller uses to remove a heat: E_el = E_heat / COP.
+ *
+ * @param heatEnergyKWh - heat removed [kWh], ≥ 0
+ * @param coefficientOfPerformance - COP of the chiller [–], > 0
+ * @returns electricity [kWh]
+ * @remarks The COP is the plant's seasonal figure; a nameplate COP at design conditions overstates it.
+ * @example chillerElectricityKWh(8760, 4) // 2190
+ */
+export function chillerElectricityKWh(heatEnergyKWh: number, coefficientOfPerformance: number): number {
+  requireNonNegativeFinite(heatEnergyKWh, 'heatEnergyKWh');
+  requirePositiveFinite(coefficientOfPerformance, 'cooling.coefficientOfPerformance');
+  return heatEnergyKWh / coefficientOfPerformance;
+}
+
+/**
  * Annual heat, purchased energy, cost and CO₂ of a steady heat flow on an energy basis.
  *
- * @param heatFlowW - heat flow [W] (sign ignored)
- * @param basis - hours, efficiency, price, emission factor
- * @returns heat [kWh, GJ], purchased energy [kWh], cost (rounded), CO₂ [kg, t]
+ * A loss (Q ≥ 0) is made up by the heat source: E_fuel = |Q|·h / η, costed at the energy price with its emission
+ * factor. A gain (Q < 0) with `basis.cooling` is removed by a chiller: E_el = |Q|·h / COP, costed at the electricity
+ * price with electricity's emission factor. A gain without `basis.cooling` is charged to the heat source as a loss
+ * of the same size (the older behaviour, kept for callers that give no cooling basis).
+ *
+ * @param heatFlowW - heat flow [W], positive = loss, negative = gain
+ * @param basis - hours, efficiency, price, emission factor, and optionally the cooling basis
+ * @returns the service costed, heat [kWh, GJ], purchased energy [kWh], cost (rounded), CO₂ [kg, t]
  * @example annualEnergyAssessment(1000, { operatingHoursPerYear: 8760, heatSourceEfficiency: 1, price: { amount: '0.1', per: 'kWh' }, emissionFactor: EXAMPLE_NATURAL_GAS_EMISSION_FACTOR }).cost.text // "876.00"
+ * @example annualEnergyAssessment(-1000, { …, cooling: { coefficientOfPerformance: 4, electricityPrice: { amount: '0.2', per: 'kWh' }, electricityEmissionFactor: { kgCo2PerKWh: 0.3, basis: '…' } } })
+ *   // → service 'cooling', purchasedKWh 2190, cost "438.00", CO₂ 657 kg
  */
 export function annualEnergyAssessment(heatFlowW: number, basis: EnergyBasis): AnnualEnergyAssessment {
   const heat = annualHeatEnergy(heatFlowW, basis.operatingHoursPerYear);
+  if (heatFlowW < 0 && basis.cooling !== undefined) {
+    const cooling = basis.cooling;
+    if (cooling === null || typeof cooling !== 'object') throw new CalcInputError('cooling', 'cooling must be an object');
+    const purchasedKWh = chillerElectricityKWh(heat.kWh, cooling.coefficientOfPerformance);
+    return {
+      service: 'cooling',
+      heat,
+      purchasedKWh,
+      cost: energyCost(purchasedKWh, cooling.electricityPrice),
+      co2: annualCo2(purchasedKWh, cooling.electricityEmissionFactor),
+    };
+  }
   const purchasedKWh = fuelEnergyKWh(heat.kWh, basis.heatSourceEfficiency);
   return {
+    service: 'heating',
     heat,
     purchasedKWh,
     cost: energyCost(purchasedKWh, basis.price),
@@ -233,6 +291,11 @@ export type SavingVersusBare = {
   co2KgSaved: number;
 };
 
+function moneyDecimals(a: AnnualEnergyAssessment, basis: EnergyBasis): number {
+  const price = a.service === 'cooling' && basis.cooling ? basis.cooling.electricityPrice : basis.price;
+  return price.currencyDecimals ?? 2;
+}
+
 /**
  * Saving of insulation against the bare surface: ΔE = (|Q_bare| − |Q_ins|) · hours, and the same for fuel,
  * cost and CO₂.
@@ -249,7 +312,7 @@ export function savingVersusBare(bareHeatFlowW: number, insulatedHeatFlowW: numb
   const bare = annualEnergyAssessment(bareHeatFlowW, basis);
   const insulated = annualEnergyAssessment(insulatedHeatFlowW, basis);
   const reduction = Math.abs(bareHeatFlowW) - Math.abs(insulatedHeatFlowW);
-  const decimals = basis.price.currencyDecimals ?? 2;
+  const decimals = Math.max(moneyDecimals(bare, basis), moneyDecimals(insulated, basis));
   const costSaved = bare.cost.amount.minus(insulated.cost.amount);
   return {
     heatFlowReductionW: reduction,

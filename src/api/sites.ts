@@ -4,7 +4,7 @@ import type { SitePatchInput } from '../../shared/schemas/sites';
 
 import { api, shouldRetry, unwrap } from './client';
 import { staleTimes } from './stale-times';
-import type { Site, SiteDetail } from './types';
+import type { Site, SiteDetail, SiteMember } from './types';
 
 export const siteKeys = {
   all: ['sites'] as const,
@@ -63,6 +63,37 @@ export function useDeleteSite() {
       if (result.kind !== 'ok') return;
       queryClient.removeQueries({ queryKey: siteKeys.detail(id) });
       void queryClient.invalidateQueries({ queryKey: siteKeys.list() });
+    },
+  });
+}
+
+const membersPath = (id: Site['id'], userId?: SiteMember['userId']) =>
+  `${sitePath(id)}/members${userId === undefined ? '' : `/${encodeURIComponent(String(userId))}`}`;
+
+/** Adds a team member (typically a contractor) to a site, so they can see it. */
+export function useAddSiteMember(siteId: Site['id']) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (userId: SiteMember['userId']) => api.post<{ members: SiteMember[] }>(membersPath(siteId), { userId: Number(userId) }),
+    onSuccess: (result) => {
+      if (result.kind !== 'ok') return;
+      queryClient.setQueryData<SiteDetail>(siteKeys.detail(siteId), (old) => (old ? { ...old, members: result.data.members } : old));
+      void queryClient.invalidateQueries({ queryKey: siteKeys.detail(siteId) });
+    },
+  });
+}
+
+/** Takes a person off a site; a contractor then no longer sees it. */
+export function useRemoveSiteMember(siteId: Site['id']) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (userId: SiteMember['userId']) => api.del<null>(membersPath(siteId, userId)),
+    onSuccess: (result, userId) => {
+      if (result.kind !== 'ok') return;
+      queryClient.setQueryData<SiteDetail>(siteKeys.detail(siteId), (old) =>
+        old ? { ...old, members: (old.members ?? []).filter((m) => String(m.userId) !== String(userId)) } : old,
+      );
+      void queryClient.invalidateQueries({ queryKey: siteKeys.detail(siteId) });
     },
   });
 }

@@ -85,10 +85,17 @@ export interface Site {
   updatedAt?: string;
 }
 
+/** A person added to a site (contractors see only the sites they are added to). */
+export interface SiteMember {
+  userId: number | string;
+  name: string;
+  email: string;
+}
+
 /** One site as GET /sites/:id answers it; owners and engineers also get who was invited to it. */
 export interface SiteDetail extends Site {
   designBases: DesignBases;
-  members?: { userId: number | string; name: string; email: string }[];
+  members?: SiteMember[];
 }
 
 export interface CaughtMail {

@@ -1,12 +1,13 @@
 /**
  * Shared links: the case travels in the URL as its SI CalcCase (query parameter `case`, compact JSON),
- * with the few form choices a case does not carry in `o`. Display units never enter the link, so a
- * link opens the same case whatever the reader's unit setting.
+ * with the few form choices a case does not carry in `o`, and the display units it was shown in (`u`,
+ * SI or US). The case itself stays SI: the units only choose how the reader first sees it.
  */
 import * as yup from 'yup';
 
 import type { CalcCase } from '../../shared/calc/types';
 import type { DraftOptions } from './quick-case';
+import type { UnitSystem } from './units';
 
 /**
  * Drop undefined members. Numbers are kept exactly (JSON writes the shortest text that reads back to the
@@ -27,10 +28,11 @@ export function caseToParam(c: CalcCase): string {
   return JSON.stringify(tidy(c));
 }
 
-/** The query string (without "?") for a case and its options. */
-export function encodeCaseQuery(c: CalcCase, o?: DraftOptions): string {
+/** The query string (without "?") for a case, its options and the display units it was shown in. */
+export function encodeCaseQuery(c: CalcCase, o?: DraftOptions, units?: UnitSystem): string {
   const parts = [`case=${encodeURIComponent(caseToParam(c))}`];
   if (o && Object.keys(o).length > 0) parts.push(`o=${encodeURIComponent(JSON.stringify(tidy(o)))}`);
+  if (units) parts.push(`u=${units}`);
   return parts.join('&');
 }
 
@@ -106,7 +108,7 @@ const caseSchema = yup.object({
 
 export type DecodedLink =
   | { kind: 'none' }
-  | { kind: 'ok'; case: CalcCase; options: DraftOptions }
+  | { kind: 'ok'; case: CalcCase; options: DraftOptions; /** Display units of the link, when it names them. */ units?: UnitSystem }
   | { kind: 'invalid'; message: string };
 
 /**
@@ -141,5 +143,8 @@ export function decodeCaseParams(caseParam: string | undefined | null, optionsPa
 /** Read a query string such as window.location.search. */
 export function decodeCaseQuery(search: string): DecodedLink {
   const params = new URLSearchParams(search.startsWith('?') ? search.slice(1) : search);
-  return decodeCaseParams(params.get('case'), params.get('o'));
+  const decoded = decodeCaseParams(params.get('case'), params.get('o'));
+  const u = params.get('u');
+  if (decoded.kind === 'ok' && (u === 'SI' || u === 'US')) return { ...decoded, units: u };
+  return decoded;
 }

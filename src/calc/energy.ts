@@ -1,16 +1,19 @@
 /**
  * Annual energy, cost and CO₂ for the quick-sizing screen: a thin adapter over shared/calc/energy with
  * the assumptions the screen shows. The basis follows the geometry (per metre of pipe, per m² of wall,
- * per vessel); a heat gain on cold service counts by its magnitude.
+ * per vessel); a heat loss is made up by the heat source (fuel), a heat gain on cold service is removed by a
+ * chiller (electricity at its coefficient of performance).
  */
 import { annualEnergyAssessment, savingVersusBare, type EnergyBasis } from '../../shared/calc/energy';
 
 import type { EnergyAssumptions } from './quick-case';
 
 export type EnergyFigures = {
+  /** `heating`: fuel for the heat source makes up a loss; `cooling`: electricity for a chiller removes a gain. */
+  service: 'heating' | 'cooling';
   /** Heat through the surface in a year [kWh]. */
   heatKWh: number;
-  /** Purchased (fuel) energy after the heat-source efficiency [kWh]. */
+  /** Purchased energy [kWh]: fuel after the heat-source efficiency, or chiller electricity after the COP. */
   fuelKWh: number;
   /** Money in the assumptions' currency, rounded to cents. */
   cost: number;
@@ -25,8 +28,25 @@ export type EnergyFigures = {
   savingFraction: number | null;
 };
 
-function basisOf(a: EnergyAssumptions): EnergyBasis | null {
-  if (a.operatingHoursPerYear === null || a.efficiency === null || a.pricePerKWh === null || a.co2KgPerKWh === null) return null;
+/** The assumptions as an energy basis; a gain needs the cooling assumptions, a loss the heat-source ones. */
+function basisOf(a: EnergyAssumptions, gain: boolean): EnergyBasis | null {
+  if (a.operatingHoursPerYear === null) return null;
+  if (gain) {
+    if (a.coolingCop === null || a.electricityPricePerKWh === null || a.electricityCo2KgPerKWh === null) return null;
+    return {
+      operatingHoursPerYear: a.operatingHoursPerYear,
+      // Not used for a gain; the shared basis needs one.
+      heatSourceEfficiency: a.efficiency ?? 1,
+      price: { amount: String(a.pricePerKWh ?? 0), per: 'kWh', currencyDecimals: 2 },
+      emissionFactor: { kgCo2PerKWh: a.co2KgPerKWh ?? 0, basis: a.co2Basis.trim() || 'not stated' },
+      cooling: {
+        coefficientOfPerformance: a.coolingCop,
+        electricityPrice: { amount: String(a.electricityPricePerKWh), per: 'kWh', currencyDecimals: 2 },
+        electricityEmissionFactor: { kgCo2PerKWh: a.electricityCo2KgPerKWh, basis: a.electricityCo2Basis.trim() || 'not stated' },
+      },
+    };
+  }
+  if (a.efficiency === null || a.pricePerKWh === null || a.co2KgPerKWh === null) return null;
   return {
     operatingHoursPerYear: a.operatingHoursPerYear,
     heatSourceEfficiency: a.efficiency,
@@ -35,14 +55,18 @@ function basisOf(a: EnergyAssumptions): EnergyBasis | null {
   };
 }
 
-/** Annual figures for a heat flow (W/m, W/m² or W) and its bare-surface counterpart; null when an assumption is missing. */
+/**
+ * Annual figures for a heat flow (W/m, W/m² or W) and its bare-surface counterpart; null when an assumption is
+ * missing. A gain (negative flow) is costed as chiller electricity.
+ */
 export function annualEnergy(heatFlowW: number, bareHeatFlowW: number | null, a: EnergyAssumptions): EnergyFigures | null {
-  const basis = basisOf(a);
+  const basis = basisOf(a, heatFlowW < 0);
   if (!basis || !Number.isFinite(heatFlowW)) return null;
   try {
     if (bareHeatFlowW === null || !Number.isFinite(bareHeatFlowW)) {
       const x = annualEnergyAssessment(heatFlowW, basis);
       return {
+        service: x.service,
         heatKWh: x.heat.kWh,
         fuelKWh: x.purchasedKWh,
         cost: x.cost.amount.toNumber(),
@@ -57,6 +81,7 @@ export function annualEnergy(heatFlowW: number, bareHeatFlowW: number | null, a:
     }
     const s = savingVersusBare(bareHeatFlowW, heatFlowW, basis);
     return {
+      service: s.insulated.service,
       heatKWh: s.insulated.heat.kWh,
       fuelKWh: s.insulated.purchasedKWh,
       cost: s.insulated.cost.amount.toNumber(),

@@ -97,6 +97,17 @@ export function formatMoney(amount: number, currency: string): Formatted {
   return { value, unit: '', text: value, spoken: value.replace('−', 'minus ') };
 }
 
+/** The symbol of a currency ("$", "€", "£"), or its code and a space when it has none in this locale. */
+export function currencySymbol(code: string): string {
+  try {
+    const part = new Intl.NumberFormat(LOCALE, { style: 'currency', currency: code }).formatToParts(0).find((p) => p.type === 'currency');
+    if (part && part.value !== code) return part.value;
+  } catch {
+    // Not an ISO 4217 code: fall through to the code itself.
+  }
+  return `${code} `;
+}
+
 /** Hours to one decimal. */
 export function formatHours(hours: number): Formatted {
   return pack(fixed(hours, 1), 'h', 'hours');

@@ -42,13 +42,34 @@ describe('live evaluation of the quick-sizing draft', () => {
     expect(present(d, o, 'SI').verdict.state).toBe('pass');
   });
 
-  it('when no thickness can reach the limit, then the error says so and offers what would help', () => {
-    const o = evaluateDraft({ ...defaultDraft(), maxSurfaceC: 20 }, 'SI');
-    expect(o.kind).toBe('error');
-    if (o.kind !== 'error') return;
-    expect(o.code).toBe('TARGET_NOT_REACHABLE');
-    expect(o.advice.join(' ')).toMatch(/lower conductivity/);
-    expect(o.advice.join(' ')).toMatch(/emissivity/);
+  it('when no thickness can reach the limit, then the best build-up within reach is shown with the charts and what would help', () => {
+    const d = { ...defaultDraft(), maxSurfaceC: 20 };
+    const o = evaluateDraft(d, 'SI');
+    if (o.kind !== 'ok') throw new Error('expected the best build-up within reach');
+    expect(o.shortfall?.code).toBe('TARGET_NOT_REACHABLE');
+    expect(o.shortfall?.bestThicknessM).toBe(0.5);
+    expect(o.chosenThicknessM).toBeCloseTo(0.5, 12);
+    expect(o.sweep.length).toBeGreaterThan(10);
+    expect(o.shortfall?.advice.join(' ')).toMatch(/lower conductivity/);
+    expect(o.shortfall?.advice.join(' ')).toMatch(/emissivity/);
+    const p = present(d, o, 'SI');
+    expect(p.verdict.state).toBe('fail');
+    // The shortfall carries its unit: kelvin for a temperature difference, and the figure reached.
+    expect(p.verdict.text).toMatch(/lowest surface temperature within reach is \d+\.\d °C with 500 mm, the thickest searched — \d+\.\d K above the 20\.0 °C/);
+    expect(present(d, o, 'US').verdict.text).toMatch(/with 19⅝ in, the thickest searched — \d+\.\d °F above the 68\.0 °F/);
+    expect(p.headline[0].testID).toBe('qs-result-best');
+  });
+
+  it('when the series cannot make the thickness needed, then it says what it needs and what two of the thickest layers give, without internal names', () => {
+    // A 600 °C process held to a 40 °C surface needs more than two metric layers of 100 mm each.
+    const d: Draft = { ...defaultDraft(), processTemperatureC: 600, maxSurfaceC: 40, airTemperatureC: 25, radiantTemperatureC: 25 };
+    const o = evaluateDraft(d, 'SI');
+    if (o.kind !== 'ok') throw new Error(`expected a shortfall: ${JSON.stringify(o).slice(0, 300)}`);
+    expect(o.shortfall?.code).toBe('SERIES_TOO_THIN');
+    expect(o.shortfall?.bestThicknessM).toBeCloseTo(0.2, 12);
+    const text = present(d, o, 'SI').verdict.text;
+    expect(text).toMatch(/with two of the series’ thickest single layers \(200 mm in all\); it needs \d+ mm/);
+    expect(text).not.toMatch(/maxSingleLayerM|seriesM|round\./);
   });
 
   it('when the sweep range is built, then it holds every series value in order', () => {
@@ -72,7 +93,9 @@ describe('validation of the draft', () => {
     const d = defaultDraft();
     d.layers = [{ materialId: 'custom', conductivity: [null, 0, 0], maxServiceTemperatureC: null, thicknessM: 0.05 }];
     d.mode = 'check';
-    expect(validateDraft(d, 'SI')['layers[0].conductivity[0]']).toBe('Enter k at 0 °C for layer 1 as a number.');
+    expect(validateDraft(d, 'SI')['layers[0].conductivity[0]']).toBe('Enter the conductivity at 0 °C of layer 1 as a number.');
+    // Spelt out, never a capital K that reads as kelvin.
+    expect(validateDraft({ ...d, layers: [{ ...d.layers[0], conductivity: [0.0001, 0, 0] }] }, 'US')['layers[0].conductivity[0]']).toMatch(/^The conductivity at 32 °F of layer 1 must be at least 0\.00693 Btu·in\/\(h·ft²·°F\)\.$/);
   });
 
   it('when the draft is complete, then there are no errors', () => {

@@ -7,10 +7,38 @@ import { analyse, runCase } from './run-case';
 import { conductivityIntegral } from '../../shared/calc/conduction';
 import type { CalcCase, CalcResult, Layer } from '../../shared/calc/types';
 
+import { calcErrorInFormWords } from './calc-messages';
 import { annualEnergy, type EnergyFigures } from './energy';
 import { DraftIncomplete, draftToCase, roundingOf, type Draft } from './quick-case';
 import { validateDraft, type FieldErrors } from './validation';
 import type { UnitSystem } from './units';
+
+/** Largest thickness of the solved layer the calculation searches when none is given [m] (DESIGN §6). */
+export const SEARCHED_THICKNESS_M = 0.5;
+
+/**
+ * A target no thickness reaches. The output then describes the best build-up within reach — the thickest
+ * searched, or two of the thickest series layers — so the screen can show how close it gets, with the charts.
+ */
+export type Shortfall = {
+  code: 'TARGET_NOT_REACHABLE' | 'SERIES_TOO_THIN';
+  /** Thickness of the outer layer(s) in the best build-up within reach [m]. */
+  bestThicknessM: number;
+  /** The thickness the target needs, when it exists but the series cannot make it [m]. */
+  neededThicknessM: number | null;
+  /** What would help, in plain words. */
+  advice: string[];
+};
+
+/** One layer of the build-up the result describes, with its face temperatures. */
+export type EvaluatedLayer = {
+  layer: Layer;
+  /** Index of the form's layer it comes from (a solved layer split in two maps both halves to it). */
+  draftIndex: number;
+  /** Inner and outer face temperatures [°C]. */
+  innerC: number;
+  outerC: number;
+};
 
 export type SweepPoint = { thicknessM: number; surfaceTemperatureC: number; heatFlow: number };
 export type ProfilePoint = { positionM: number; temperatureC: number };
@@ -18,11 +46,26 @@ export type ProfileBoundary = { positionM: number; temperatureC: number; label: 
 
 export type LiveOutput =
   | { kind: 'invalid'; errors: FieldErrors }
-  | { kind: 'error'; case: CalcCase; code: string; field: string; message: string; advice: string[] }
+  | {
+      kind: 'error';
+      case: CalcCase;
+      code: string;
+      /** The calc's field path. */
+      field: string;
+      /** The draft field to mark, when the form has one. */
+      formField: string | null;
+      /** In the form's words and units. */
+      message: string;
+      advice: string[];
+    }
   | {
       kind: 'ok';
+      /** The case of the draft (what the link carries). */
       case: CalcCase;
+      /** The result shown: the draft's, or with a shortfall the best build-up within reach. */
       result: CalcResult;
+      /** Set when no thickness meets the purpose; `result` is then the best build-up within reach. */
+      shortfall: Shortfall | null;
       bare: CalcResult | null;
       /** The heat flow that matters for this geometry (W/m, W/m² or W). */
       heatFlow: number;
@@ -32,6 +75,8 @@ export type LiveOutput =
       chosenThicknessM: number | null;
       profile: ProfilePoint[];
       boundaries: ProfileBoundary[];
+      /** The evaluated build-up, inside out, with face temperatures (the governing part of a vessel). */
+      buildUp: EvaluatedLayer[];
       energy: EnergyFigures | null;
     };
 
@@ -136,7 +181,14 @@ function temperatureProfile(c: CalcCase, r: CalcResult): { points: ProfilePoint[
 }
 
 /** What would help when a target cannot be reached, in plain words. */
-function adviceFor(d: Draft): string[] {
+function adviceFor(d: Draft, code: Shortfall['code']): string[] {
+  if (code === 'SERIES_TOO_THIN') {
+    return [
+      'Choose a material with lower conductivity, or add an inner layer of one.',
+      'Choose the other thickness series if it offers thicker layers.',
+      ...adviceFor(d, 'TARGET_NOT_REACHABLE').slice(1),
+    ];
+  }
   switch (d.purpose) {
     case 'personnel':
       return [
@@ -159,6 +211,30 @@ function adviceFor(d: Draft): string[] {
   }
 }
 
+/** The best build-up within reach when the target cannot be met, evaluated as it stands; null if even that fails. */
+function bestWithinReach(c: CalcCase, code: Shortfall['code']): { evaluated: CalcCase; result: CalcResult; bestThicknessM: number; neededThicknessM: number | null } | null {
+  if (!c.solveFor || c.layers.length === 0) return null;
+  try {
+    if (code === 'TARGET_NOT_REACHABLE') {
+      const t = c.solveFor.maxThicknessM ?? SEARCHED_THICKNESS_M;
+      const evaluated = withOuterThickness(c, t);
+      return { evaluated, result: analyse(evaluated), bestThicknessM: t, neededThicknessM: null };
+    }
+    const round = c.round;
+    if (!round) return null;
+    const single = round.maxSingleLayerM ?? Infinity;
+    const thickest = Math.max(...round.seriesM.filter((t) => t <= single + 1e-9));
+    const { round: _r, ...unrounded } = c;
+    const needed = analyse(unrounded).thicknessM ?? null;
+    const { solveFor: _s, round: _r2, ...rest } = c;
+    const outer = c.layers[c.layers.length - 1];
+    const evaluated: CalcCase = { ...rest, layers: [...c.layers.slice(0, -1), { ...outer, thicknessM: thickest }, { ...outer, thicknessM: thickest }] };
+    return { evaluated, result: analyse(evaluated), bestThicknessM: 2 * thickest, neededThicknessM: needed };
+  } catch {
+    return null;
+  }
+}
+
 /** The full output for one draft in one unit system (errors are worded in those units). */
 export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
   const errors = validateDraft(d, system);
@@ -171,10 +247,23 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
     throw e;
   }
   const outcome = runCase(c);
+  let result: CalcResult;
+  let evaluated = c;
+  let shortfall: Shortfall | null = null;
   if ('error' in outcome) {
-    return { kind: 'error', case: c, ...outcome.error, advice: outcome.error.code === 'TARGET_NOT_REACHABLE' ? adviceFor(d) : [] };
+    const code = outcome.error.code;
+    const best = code === 'TARGET_NOT_REACHABLE' || code === 'SERIES_TOO_THIN' ? bestWithinReach(c, code) : null;
+    if (!best) {
+      const words = calcErrorInFormWords(outcome.error, d, system);
+      return { kind: 'error', case: c, code, field: outcome.error.field, formField: words.field, message: words.message, advice: [] };
+    }
+    const sc = code as Shortfall['code'];
+    result = best.result;
+    evaluated = best.evaluated;
+    shortfall = { code: sc, bestThicknessM: best.bestThicknessM, neededThicknessM: best.neededThicknessM, advice: adviceFor(d, sc) };
+  } else {
+    result = outcome;
   }
-  const result = outcome;
   let bare: CalcResult | null = null;
   try {
     const { solveFor: _s, round: _r, ...rest } = c;
@@ -186,13 +275,20 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
   const bareHeatFlow = bare ? heatFlowOf(c, bare) : null;
   const series = roundingOf(d).seriesM;
   const swept = sweep(c, series);
-  const layers = evaluatedLayers(c, result);
+  const layers = evaluatedLayers(evaluated, result);
+  const innerM = c.layers.slice(0, -1).reduce((s, l) => s + l.thicknessM, 0);
   const chosenThicknessM = c.solveFor
-    ? result.totalThicknessM - c.layers.slice(0, -1).reduce((s, l) => s + l.thicknessM, 0)
+    ? result.totalThicknessM - innerM
     : layers.length > 0
       ? layers[layers.length - 1].thicknessM
       : null;
-  const { points, boundaries } = temperatureProfile(c, result);
+  const { points, boundaries } = temperatureProfile(evaluated, result);
   const energy = annualEnergy(heatFlow, bareHeatFlow, d.energy);
-  return { kind: 'ok', case: c, result, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, energy };
+  const lastDraft = c.layers.length - 1;
+  const buildUp: EvaluatedLayer[] = layers.flatMap((layer, i) => {
+    const outerC = result.interfaceTemperaturesC[i];
+    if (outerC === undefined) return [];
+    return [{ layer, draftIndex: Math.min(i, lastDraft), innerC: i === 0 ? c.processTemperatureC : result.interfaceTemperaturesC[i - 1], outerC }];
+  });
+  return { kind: 'ok', case: c, result, shortfall, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, buildUp, energy };
 }

@@ -3,7 +3,9 @@
  * plus the choices that a case alone does not carry (library ids, how the pipe size was given). It maps
  * to and from the calculation contract's CalcCase.
  */
-import type { CalcCase, CalcResult, ContactMaterial, Criterion, Geometry, Layer } from '../../shared/calc/types';
+import { touchSafetyVerdict } from '../../shared/calc/burn';
+import type { CalcCase, CalcResult, Contact, ContactMaterial, Criterion, Geometry, Layer } from '../../shared/calc/types';
+
 import {
   finishById,
   finishMatching,
@@ -15,6 +17,7 @@ import {
   seriesMatching,
   thicknessSeries,
 } from './library';
+import type { UnitSystem } from './units';
 
 export type GeometryKind = 'pipe' | 'vessel' | 'wall';
 export type PurposeId = 'personnel' | 'conservation' | 'condensation' | 'holding' | 'frost';
@@ -43,6 +46,13 @@ export type EnergyAssumptions = {
   /** kg CO₂ per kWh of fuel. */
   co2KgPerKWh: Num;
   co2Basis: string;
+  /** Cold service: coefficient of performance of the chiller that removes the heat gain. */
+  coolingCop: Num;
+  /** Cold service: price of electricity per kWh, in `currency`. */
+  electricityPricePerKWh: Num;
+  /** Cold service: kg CO₂ per kWh of electricity. */
+  electricityCo2KgPerKWh: Num;
+  electricityCo2Basis: string;
 };
 
 export type Draft = {
@@ -109,17 +119,24 @@ export const CONTACT_MATERIALS: { id: ContactMaterial; label: string }[] = [
   { id: 'wood', label: 'Wood' },
 ];
 
-const DEFAULT_SERIES = 'metric';
+/** The standard thickness series of a unit system: millimetre steps for SI, half-inch steps for US customary. */
+export function standardSeriesId(system: UnitSystem): string {
+  return system === 'US' ? 'inch' : 'metric';
+}
 
 function defaultEnergy(): EnergyAssumptions {
   return {
-    seriesId: DEFAULT_SERIES,
+    seriesId: standardSeriesId('SI'),
     operatingHoursPerYear: 8000,
     pricePerKWh: 0.05,
     currency: 'USD',
     efficiency: 0.85,
     co2KgPerKWh: 0.202,
     co2Basis: 'Natural gas burnt in a boiler, per kWh of fuel (typical published factor)',
+    coolingCop: 3.5,
+    electricityPricePerKWh: 0.15,
+    electricityCo2KgPerKWh: 0.4,
+    electricityCo2Basis: 'Grid electricity, location-based average (example value; use your supplier’s or national factor)',
   };
 }
 
@@ -168,6 +185,33 @@ export function defaultDraft(): Draft {
   };
 }
 
+/**
+ * Cold service: the process runs below the air, so heat flows in (a gain removed by a chiller) and a touch is
+ * judged as cold contact, not against hot burn thresholds.
+ */
+export function isColdService(d: Pick<Draft, 'processTemperatureC' | 'airTemperatureC'>): boolean {
+  return d.processTemperatureC !== null && d.airTemperatureC !== null && d.processTemperatureC < d.airTemperatureC;
+}
+
+/** The contact the draft describes (material and time). */
+export function contactOf(d: Pick<Draft, 'contactMaterial' | 'contactSeconds'>): Contact {
+  return { material: d.contactMaterial, seconds: must(d.contactSeconds, 'contactSeconds') };
+}
+
+/**
+ * The highest surface temperature "Safe to touch" is solved for: the stricter of the limit entered and the burn
+ * threshold for the contact, taken so that the rounded figure passes whether it is shown in °C or °F (the case
+ * stays the same in both unit systems).
+ */
+export function touchSolveLimitC(d: Draft): number {
+  const limitC = must(d.maxSurfaceC, 'maxSurfaceC');
+  const air = must(d.airTemperatureC, 'airTemperatureC');
+  const contact = contactOf(d);
+  const highest = (scale: 'C' | 'F') =>
+    touchSafetyVerdict({ surfaceTemperatureC: Math.max(air, limitC), airTemperatureC: air, limitC, contact, precision: { decimals: 1, scale } }).maxPassingSurfaceC ?? limitC;
+  return Math.min(highest('C'), highest('F'));
+}
+
 /** The purposes that can be worked out for this geometry. */
 export function purposeAvailable(purpose: PurposeId, kind: GeometryKind): boolean {
   const p = PURPOSES.find((x) => x.id === purpose);
@@ -209,7 +253,7 @@ function geometryOf(d: Draft): Geometry {
 function criterionOf(d: Draft): Criterion {
   switch (d.purpose) {
     case 'personnel':
-      return { criterion: 'surfaceTemperature', maxC: must(d.maxSurfaceC, 'maxSurfaceC') };
+      return { criterion: 'surfaceTemperature', maxC: isColdService(d) ? must(d.maxSurfaceC, 'maxSurfaceC') : touchSolveLimitC(d) };
     case 'conservation':
       if (d.kind === 'pipe') return { criterion: 'heatLoss', maxWPerM: must(d.maxHeatLossWPerM, 'maxHeatLossWPerM') };
       if (d.kind === 'wall') return { criterion: 'heatLoss', maxWPerM2: must(d.maxHeatFluxWPerM2, 'maxHeatFluxWPerM2') };
@@ -272,7 +316,9 @@ export function draftToCase(d: Draft): CalcCase {
   if (d.kind === 'pipe' && d.purpose === 'frost') {
     c.stagnant = { innerDiameterM: must(d.innerDiameterM, 'innerDiameterM'), pipeMassKgPerM: must(d.pipeMassKgPerM, 'pipeMassKgPerM') };
   }
-  c.contact = { material: d.contactMaterial, seconds: must(d.contactSeconds, 'contactSeconds') };
+  // Hot-surface burn thresholds apply to hot service only; cold contact is judged on screen (see present.ts).
+  const contact = contactOf(d);
+  if (!isColdService(d)) c.contact = contact;
   return c;
 }
 
@@ -280,18 +326,22 @@ export function draftToCase(d: Draft): CalcCase {
 export type DraftOptions = {
   purpose?: PurposeId;
   mode?: Mode;
-  /** The purpose's limit in checking mode (SI), when the case has no solveFor. */
+  /**
+   * The purpose's limit as entered (SI): in checking mode the case has no solveFor, and a touch limit may be
+   * solved for a stricter burn threshold than the one entered.
+   */
   limit?: number;
   pipeSizeBy?: PipeSizeBy;
   energy?: Partial<EnergyAssumptions>;
+  /** The contact of a cold-service case (which carries no hot-surface burn check). */
+  contact?: Contact;
 };
 
 export function draftOptions(d: Draft): DraftOptions {
   const o: DraftOptions = { purpose: d.purpose, mode: d.mode, pipeSizeBy: d.pipeSizeBy, energy: { ...d.energy } };
-  if (d.mode === 'check') {
-    const lim = limitValue(d);
-    if (lim !== null) o.limit = lim;
-  }
+  const lim = limitValue(d);
+  if (lim !== null) o.limit = lim;
+  if (isColdService(d) && d.contactSeconds !== null) o.contact = { material: d.contactMaterial, seconds: d.contactSeconds };
   delete o.energy?.seriesId; // the series travels in the case's round, or here when checking
   if (d.mode === 'check' && o.energy) o.energy.seriesId = d.energy.seriesId;
   return o;
@@ -379,9 +429,10 @@ export function draftFromCase(c: CalcCase, o: DraftOptions = {}): Draft {
     d.innerDiameterM = c.stagnant.innerDiameterM;
     d.pipeMassKgPerM = c.stagnant.pipeMassKgPerM;
   }
-  if (c.contact) {
-    d.contactMaterial = c.contact.material;
-    d.contactSeconds = c.contact.seconds;
+  const contact = c.contact ?? o.contact;
+  if (contact) {
+    d.contactMaterial = contact.material;
+    d.contactSeconds = contact.seconds;
   }
   if (o.energy) d.energy = { ...d.energy, ...o.energy };
   if (c.round) d.energy.seriesId = seriesMatching(c.round.seriesM)?.id ?? d.energy.seriesId;
@@ -415,7 +466,9 @@ export function draftFromCase(c: CalcCase, o: DraftOptions = {}): Draft {
   } else {
     d.mode = o.mode ?? 'check';
     d.purpose = o.purpose ?? (c.run ? 'holding' : c.stagnant ? 'frost' : d.purpose);
-    if (o.limit !== undefined && Number.isFinite(o.limit)) (d as Record<string, unknown>)[limitKey(d)] = o.limit;
+  }
+  if (typeof o.limit === 'number' && Number.isFinite(o.limit) && (!s || o.purpose === undefined || o.purpose === d.purpose)) {
+    (d as Record<string, unknown>)[limitKey(d)] = o.limit;
   }
   return d;
 }

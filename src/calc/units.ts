@@ -51,6 +51,8 @@ export type UnitDef = {
   toSI: (x: number) => number;
   /** SI value → display value. */
   fromSI: (x: number) => number;
+  /** Fixed decimals for an input drawn from SI (money to the cent); otherwise significant figures. */
+  inputDecimals?: number;
 };
 
 
@@ -127,7 +129,8 @@ const US_UNITS: Record<Quantity, UnitDef> = {
   co2Mass: linear('short t CO₂', 'short tons of CO2', 2000 * LB_KG),
   percent: identity('%', 'percent'),
   fraction: linear('%', 'percent', 0.01),
-  pricePerEnergy: linear('/MMBtu', 'per million Btu', MMBTU_PER_KWH),
+  // A price converted to MMBtu is money per unit: shown to the cent.
+  pricePerEnergy: { ...linear('/MMBtu', 'per million Btu', MMBTU_PER_KWH), inputDecimals: 2 },
   ratio: identity('', ''),
   hours: identity('h', 'hours'),
   seconds: identity('s', 'seconds'),
@@ -179,6 +182,17 @@ export function conductivityCoefficientsFromDisplay(system: UnitSystem, display:
   const s = US_UNITS.conductivity.toSI(1);
   // T_F = 32 + 1.8·T_C
   return composeLinear(display, 32, 1 / DEGF_K).map((c) => c * s);
+}
+
+/**
+ * An SI value as an input shows it in a unit system: to the cent for money per unit (a converted price reads
+ * 14.65 $/MMBtu, not 14.6536), else up to six significant figures.
+ */
+export function formatInputValue(quantity: Quantity, system: UnitSystem, si: number): string {
+  const u = unitOf(quantity, system);
+  const v = u.fromSI(si);
+  if (!Number.isFinite(v)) return '';
+  return u.inputDecimals !== undefined ? v.toFixed(u.inputDecimals) : formatInputNumber(v);
 }
 
 /**

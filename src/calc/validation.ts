@@ -4,19 +4,29 @@
  */
 import * as yup from 'yup';
 
-import { fixed } from './format';
-import { limitKey, purposeAvailable, type Draft } from './quick-case';
+import { currencySymbol, fixed } from './format';
+import { isColdService, limitKey, purposeAvailable, type Draft } from './quick-case';
 import { type Quantity, type UnitSystem, formatInputNumber, unitOf } from './units';
 
 export type FieldErrors = Record<string, string>;
 
-type Rule = { label: string; quantity: Quantity; min?: number; max?: number; exclusiveMin?: boolean; optional?: boolean };
+type Rule = {
+  label: string;
+  quantity: Quantity;
+  min?: number;
+  max?: number;
+  exclusiveMin?: boolean;
+  optional?: boolean;
+  /** Put before the unit, e.g. the currency of a price ("$" → "$/kWh"). */
+  unitPrefix?: string;
+};
 
-function show(quantity: Quantity, system: UnitSystem, si: number): string {
+function show(quantity: Quantity, system: UnitSystem, si: number, unitPrefix = ''): string {
   const u = unitOf(quantity, system);
   const v = u.fromSI(si);
   const text = Math.abs(v) >= 100 ? fixed(v, 0) : formatInputNumber(v, 3).replace('-', '−');
-  return `${text}${u.suffix ? ` ${u.suffix}` : ''}`;
+  const unit = `${unitPrefix}${u.suffix}`;
+  return `${text}${unit ? ` ${unit}` : ''}`;
 }
 
 function numberRule(r: Rule, system: UnitSystem) {
@@ -25,20 +35,25 @@ function numberRule(r: Rule, system: UnitSystem) {
   if (r.min !== undefined) {
     const min = r.min;
     s = r.exclusiveMin
-      ? s.test('min', `${cap(r.label)} must be more than ${show(r.quantity, system, min)}.`, (v) => v === null || v === undefined || v > min)
-      : s.test('min', `${cap(r.label)} must be at least ${show(r.quantity, system, min)}.`, (v) => v === null || v === undefined || v >= min);
+      ? s.test('min', `${cap(r.label)} must be more than ${show(r.quantity, system, min, r.unitPrefix)}.`, (v) => v === null || v === undefined || v > min)
+      : s.test('min', `${cap(r.label)} must be at least ${show(r.quantity, system, min, r.unitPrefix)}.`, (v) => v === null || v === undefined || v >= min);
   }
   if (r.max !== undefined) {
     const max = r.max;
-    s = s.test('max', `${cap(r.label)} must be at most ${show(r.quantity, system, max)}.`, (v) => v === null || v === undefined || v <= max);
+    s = s.test('max', `${cap(r.label)} must be at most ${show(r.quantity, system, max, r.unitPrefix)}.`, (v) => v === null || v === undefined || v <= max);
   }
   return s;
 }
 
 const cap = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
+/** The conductivity at 0 °C (the SI coefficient c0) in the words of the form: "k", spelt out, is not kelvin. */
+export function conductivityAtZeroLabel(layer: number, system: UnitSystem): string {
+  return `the conductivity at ${system === 'US' ? '32 °F' : '0 °C'} of layer ${layer}`;
+}
+
 /** The rules that apply to this draft (geometry and purpose decide which fields matter). */
-function rulesFor(d: Draft): Record<string, Rule> {
+function rulesFor(d: Draft, system: UnitSystem = 'SI'): Record<string, Rule> {
   const rules: Record<string, Rule> = {
     processTemperatureC: { label: 'the process temperature', quantity: 'temperature', min: -273, max: 1200 },
     emissivity: { label: 'the emissivity', quantity: 'ratio', min: 0.02, max: 1 },
@@ -66,8 +81,8 @@ function rulesFor(d: Draft): Record<string, Rule> {
     if (l.materialId === 'custom') {
       l.conductivity.forEach((_, j) => {
         rules[`layers[${i}].conductivity[${j}]`] = j === 0
-          ? { label: `k at 0 °C for ${n}`, quantity: 'ratio', min: 0.001, max: 5 }
-          : { label: `coefficient c${j} for ${n}`, quantity: 'ratio' };
+          ? { label: conductivityAtZeroLabel(i + 1, system), quantity: 'conductivity', min: 0.001, max: 5 }
+          : { label: `coefficient c${j} of the conductivity of ${n}`, quantity: 'ratio' };
       });
       rules[`layers[${i}].maxServiceTemperatureC`] = { label: `the maximum service temperature of ${n}`, quantity: 'temperature', optional: true, min: -273, max: 1500 };
     }
@@ -93,11 +108,27 @@ function rulesFor(d: Draft): Record<string, Rule> {
     rules.pipeMassKgPerM = { label: 'the pipe mass per metre', quantity: 'massPerLength', min: 0, max: 2000 };
   }
   const e = 'energy.';
+  const money = currencySymbol(d.energy.currency);
   rules[`${e}operatingHoursPerYear`] = { label: 'the operating hours', quantity: 'hours', min: 0, max: 8784 };
-  rules[`${e}pricePerKWh`] = { label: 'the energy price', quantity: 'pricePerEnergy', min: 0, max: 100 };
-  rules[`${e}efficiency`] = { label: 'the heat-source efficiency', quantity: 'fraction', min: 0.01, max: 1 };
-  rules[`${e}co2KgPerKWh`] = { label: 'the CO₂ factor', quantity: 'co2Factor', min: 0, max: 5 };
+  if (isColdService(d)) {
+    // A gain is removed by a chiller: only its assumptions are shown and needed.
+    rules[`${e}coolingCop`] = { label: 'the chiller’s coefficient of performance', quantity: 'ratio', min: 0.3, max: 15 };
+    rules[`${e}electricityPricePerKWh`] = { label: 'the electricity price', quantity: 'pricePerEnergy', min: 0, max: 100, unitPrefix: money };
+    rules[`${e}electricityCo2KgPerKWh`] = { label: 'the CO₂ factor of electricity', quantity: 'co2Factor', min: 0, max: 2 };
+  } else {
+    rules[`${e}pricePerKWh`] = { label: 'the energy price', quantity: 'pricePerEnergy', min: 0, max: 100, unitPrefix: money };
+    rules[`${e}efficiency`] = { label: 'the heat-source efficiency', quantity: 'fraction', min: 0.01, max: 1 };
+    rules[`${e}co2KgPerKWh`] = { label: 'the CO₂ factor', quantity: 'co2Factor', min: 0, max: 5 };
+  }
   return rules;
+}
+
+/**
+ * The form's words for a field path of the draft ("the process temperature", "the thickness of layer 2"), or
+ * null when the field has no rule in this draft.
+ */
+export function fieldLabel(d: Draft, path: string, system: UnitSystem): string | null {
+  return rulesFor(d, system)[path]?.label ?? null;
 }
 
 function read(d: Draft, path: string): unknown {
@@ -110,7 +141,7 @@ function read(d: Draft, path: string): unknown {
 /** Every field error of the draft, keyed by field path; an empty object when the draft is complete. */
 export function validateDraft(d: Draft, system: UnitSystem): FieldErrors {
   const errors: FieldErrors = {};
-  const rules = rulesFor(d);
+  const rules = rulesFor(d, system);
   for (const [path, rule] of Object.entries(rules)) {
     try {
       numberRule(rule, system).validateSync(read(d, path));

@@ -11,6 +11,7 @@ const palette = {
   slate600: '#4F5E69',
   slate300: '#B9C1C7',
   slate200: '#D9DDE0',
+  slate100: '#E8ECEF',
   ember700: '#B23A12',
   ember500: '#D9531E',
   ember100: '#FBE3D8',
@@ -40,7 +41,7 @@ export const colors = {
   border: palette.slate200,
   /** Stronger borders: inputs, focused outlines' base. */
   borderStrong: palette.slate300,
-  /** Heat accent: hot-service limits, primary actions. */
+  /** Heat accent: hot-service limits and heat in charts (never an action or a selection: it sits too near danger red). */
   heat: palette.ember700,
   /** Heat accent, lighter, for chart lines on paper. */
   heatLine: palette.ember500,
@@ -61,7 +62,17 @@ export const colors = {
   /** Fail state (always with an icon or word). */
   fail: palette.red700,
   failSoft: palette.red100,
-  /** Text on a heat-coloured button. */
+  /** Destructive actions: the fail red, always with a warning icon and a plain word ("Delete", "Remove"). */
+  danger: palette.red700,
+  /** Primary actions: slate ink, far from the danger red in hue and lightness. */
+  action: palette.slate900,
+  /** Links and quiet actions: steel blue, underlined or worded so they never rest on colour alone. */
+  link: palette.steel700,
+  /** The chosen option of a group (chips, radios, lists, the current page): ink border with a check mark. */
+  selected: palette.slate900,
+  /** Background of the chosen option. */
+  selectedSoft: palette.slate100,
+  /** Text on an action or danger button. */
   onAccent: palette.paperRaised,
   /** Keyboard focus ring. */
   focus: palette.steel500,

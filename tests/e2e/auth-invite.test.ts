@@ -218,6 +218,8 @@ describe.each([
     const engineerRow = page.getByTestId(`member-${engineerEmail}`);
     await engineerRow.getByRole('button', { name: 'Change role of Bram Lindqvist' }).click();
     await engineerRow.getByRole('radio', { name: 'Safety officer' }).click();
+    // A role change is confirmed first, with what the role may do.
+    await engineerRow.getByRole('button', { name: 'Yes, make Bram Lindqvist Safety officer' }).click();
     // The picker closes once the server has saved the role.
     await engineerRow.getByRole('radiogroup').waitFor({ state: 'detached' });
     await expect(engineerRow.innerText()).resolves.toContain('Safety officer');

@@ -266,16 +266,19 @@ describe('quick sizing when something is wrong', () => {
     expect(await p.getByText('Error: The relative humidity must be at most 100 %.').count()).toBeGreaterThan(0);
   });
 
-  it('when the target cannot be reached, then the screen says why and what would help', async () => {
+  it('when the target cannot be reached, then the screen says why, how close it gets and what would help, and keeps the charts', async () => {
     const p = browsers.desktop!.page;
     await openQuickSizing(p);
-    await byTestId(p, 'qs-input-limit').fill('20'); // below the 25 °C air: no insulation makes a hot surface that cool
-    await p.waitForSelector('[data-testid="qs-calc-error"]');
-    const text = (await byTestId(p, 'qs-calc-error').textContent()) ?? '';
-    expect(text).toContain('No thickness reaches this target');
+    await typeInto(p, 'qs-input-limit', '20'); // below the 25 °C air: no insulation makes a hot surface that cool
+    await p.waitForSelector('[data-testid="qs-shortfall"]');
+    const verdict = (await byTestId(p, 'qs-verdict').textContent()) ?? '';
+    expect(verdict).toContain('No thickness meets “Safe to touch”');
+    expect(verdict).toMatch(/\d+\.\d K above the 20\.0 °C it must not exceed/);
+    const text = (await byTestId(p, 'qs-shortfall').textContent()) ?? '';
     expect(text).toContain('lower conductivity');
     expect(text).toContain('emissivity');
     expect(text).toContain('Raise the surface limit');
+    expect(await chartPaths(p, 'qs-chart-surface')).not.toHaveLength(0);
     await screenshot(p, 'quick-sizing-impossible-1440x900');
   });
 

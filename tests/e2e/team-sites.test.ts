@@ -2,7 +2,10 @@
  * Sites and the team in a real browser, against the seeded demo team: an owner opens a site, edits
  * it and deletes another, removes a member (and is refused removing the last owner), follows a caught
  * mail's link; a safety officer edits the touch-safety basis alone; a viewer sees no edit controls;
- * a site's address survives a hard reload; quick sizing sits inside the navigation once signed in.
+ * a site's address survives a hard reload; quick sizing sits inside the navigation once signed in; an owner
+ * adds a contractor to a site (who then sees it) and takes them off; absurd design-basis values are refused and
+ * unusual ones warned about; a role change waits for a confirmation that says what the role may do; the delete
+ * confirmation fits a phone.
  * Once on a phone (390×844) and once on a wide screen (1440×900), each against its own fresh team.
  */
 import fs from 'node:fs';
@@ -128,6 +131,13 @@ describe.each([
     await gotoApp(page, `${server.url}/sites/${chilled}`);
     await page.getByTestId('site-delete').click();
     await page.getByTestId('site-delete-confirm').waitFor();
+    // The confirmation fits the screen, its last words included.
+    const confirmBox = await page.getByTestId('site-delete-confirm').boundingBox();
+    expect(confirmBox && confirmBox.x >= 0 && confirmBox.x + confirmBox.width <= viewport.width).toBe(true);
+    const undone = await page.getByText('This cannot be undone.').boundingBox();
+    expect(undone && undone.x + undone.width <= viewport.width).toBe(true);
+    const danger = page.getByTestId('site-delete-confirm-button');
+    expect(await danger.boundingBox().then((b) => b && b.x + b.width <= viewport.width)).toBe(true);
     await screenshot(page, `team-sites-${tag}-05-delete-confirm`);
     await page.getByTestId('site-delete-confirm-button').click();
     await page.waitForURL((u) => new URL(u).pathname === '/sites');
@@ -139,6 +149,127 @@ describe.each([
     await gotoApp(page, `${server.url}/sites/${chilled}`);
     await page.getByTestId('site-missing').waitFor();
 
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when the owner adds a contractor to a site, then the contractor sees it and its bases in their units; taken off, it is gone', async () => {
+    const { page } = opened;
+    const contractor = user('contractor');
+    const id = await siteId(server, 'Thermal-oil loop');
+    await gotoApp(page, `${server.url}/sites/${id}`);
+    const people = page.getByTestId('site-people');
+    await people.getByTestId('site-people-empty').waitFor();
+    // The winter basis is there, with the seeded coldest conditions.
+    await expect(page.getByTestId('basis-winter-airTemperatureC-value').innerText()).resolves.toBe('−12 °C');
+    // Contractors come first in the list of people who can be added.
+    await expect(people.getByTestId('site-people-choose').innerText()).resolves.toContain(`${contractor.name} — Contractor`);
+    await people.getByTestId('site-people-add').click();
+    await people.getByTestId('site-people-added').waitFor();
+    await expect(people.getByTestId(`site-person-${contractor.email}`).innerText()).resolves.toContain('Contractor');
+    const rows = await server.db('site_members as sm').join('users as u', 'u.id', 'sm.user_id').where({ 'sm.site_id': id, 'u.email': contractor.email }).count({ n: '*' });
+    expect(Number((rows[0] as { n: number | string }).n)).toBe(1);
+    await screenshot(page, `team-sites-${tag}-05a-site-people`);
+
+    // The contractor now sees the site, with prices converted to cents in their US units.
+    await signInAs(page, server, 'contractor');
+    await page.getByTestId(`site-${id}`).click();
+    await page.waitForURL(`**/sites/${id}`);
+    await expect(page.getByTestId('basis-energy-energyPricePerKWh-value').innerText()).resolves.toBe('13.19 EUR/MMBtu');
+    await expect(page.getByTestId('basis-energy-electricityPricePerKWh-value').innerText()).resolves.toBe('55.68 EUR/MMBtu');
+    await expect(page.getByTestId('basis-winter-airTemperatureC-value').innerText()).resolves.toBe('10.4 °F');
+    await expect(page.getByTestId('site-people').count()).resolves.toBe(0);
+    await screenshot(page, `team-sites-${tag}-05b-contractor-site`);
+
+    // Taken off again, after a confirmation.
+    await signInAs(page, server, 'owner');
+    await gotoApp(page, `${server.url}/sites/${id}`);
+    await page.getByRole('button', { name: `Remove ${contractor.name} from Thermal-oil loop` }).click();
+    await page.getByRole('button', { name: `Yes, remove ${contractor.name} from Thermal-oil loop` }).click();
+    await page.getByTestId('site-people-empty').waitFor();
+    const left = await server.db('site_members').where({ site_id: id }).count({ n: '*' });
+    expect(Number((left[0] as { n: number | string }).n)).toBe(0);
+    await signInAs(page, server, 'contractor');
+    await expect(page.getByTestId(`site-${id}`).count()).resolves.toBe(0);
+    await signInAs(page, server, 'owner');
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when design bases get absurd values, then they are refused with the bound; unusual ones are saved with a warning', async () => {
+    const { page } = opened;
+    const id = await siteId(server, 'Process unit 2');
+    await gotoApp(page, `${server.url}/sites/${id}`);
+    await page.getByTestId('site-edit').click();
+    await fill(page, 'basis-touch-airTemperatureC', '999');
+    await fill(page, 'basis-energy-windSpeedMS', '59');
+    await page.getByTestId('site-save').click();
+    await page.getByText('Touch safety: air temperature must be at most 60 °C (the hottest credible air where people work)').waitFor();
+    await page.getByText('Energy: wind speed must be at most 30 m/s (beyond storm force)').waitFor();
+    await screenshot(page, `team-sites-${tag}-05c-bounds-refused`);
+    // Nothing was sent; and the server holds the same bounds.
+    const stored = (await server.db('sites').where({ id }).first('design_bases')) as { design_bases: unknown };
+    const before = typeof stored.design_bases === 'string' ? JSON.parse(stored.design_bases) : stored.design_bases;
+    expect(before.touch.airTemperatureC).toBe(35);
+    const patch = (body: unknown) =>
+      page.evaluate(
+        async ({ siteId, payload }) => {
+          const session = (await (await fetch('/api/v1/auth/session')).json()) as { csrfToken: string };
+          const res = await fetch(`/api/v1/sites/${siteId}`, {
+            method: 'PATCH',
+            headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': session.csrfToken },
+            body: JSON.stringify(payload),
+          });
+          return { status: res.status, body: (await res.json()) as { errors?: { code: string; field: string; message: string }[] } };
+        },
+        { siteId: id, payload: body },
+      );
+    const refused = await patch({ designBases: { touch: { airTemperatureC: 999 } } });
+    expect(refused.status).toBe(400);
+    expect(refused.body.errors?.[0]).toMatchObject({ code: 'VALIDATION_FAILED', field: 'designBases.touch.airTemperatureC', message: expect.stringContaining('at most 60 °C') });
+
+    await fill(page, 'basis-touch-airTemperatureC', '35');
+    await fill(page, 'basis-energy-windSpeedMS', '3.5');
+    await fill(page, 'basis-touch-windSpeedMS', '4');
+    await page.getByTestId('basis-touch-windSpeedMS-warning').waitFor();
+    await expect(page.getByTestId('basis-touch-windSpeedMS-warning').innerText()).resolves.toContain('still air, the worst case');
+    await fill(page, 'basis-energy-coolingCop', '5');
+    await screenshot(page, `team-sites-${tag}-05d-unusual-warned`);
+    await page.getByTestId('site-save').click();
+    await page.getByTestId('site-edit-form').waitFor({ state: 'detached' });
+    await expect(page.getByTestId('basis-touch-windSpeedMS-value').innerText()).resolves.toBe('4 m/s');
+    await expect(page.getByTestId('basis-energy-coolingCop-value').innerText()).resolves.toBe('5');
+    const after = (await server.db('sites').where({ id }).first('design_bases')) as { design_bases: unknown };
+    const bases = typeof after.design_bases === 'string' ? JSON.parse(after.design_bases) : after.design_bases;
+    expect(bases.touch.windSpeedMS).toBe(4);
+    expect(bases.energy.coolingCop).toBe(5);
+    // The server takes a winter basis of its own, too.
+    const winter = await patch({ designBases: { winter: { airTemperatureC: -20, windSpeedMS: 7 } } });
+    expect(winter.status).toBe(200);
+    await gotoApp(page, `${server.url}/sites/${id}`);
+    await expect(page.getByTestId('basis-winter-airTemperatureC-value').innerText()).resolves.toBe('−20 °C');
+    assertNoCspViolations(page);
+    assertNoPageErrors(page);
+  });
+
+  it('when the owner starts a role change, then nothing changes until it is confirmed, and the confirmation says what the role may do', async () => {
+    const { page } = opened;
+    const engineer = user('engineer');
+    await gotoApp(page, `${server.url}/team`);
+    const row = page.getByTestId(`member-${engineer.email}`);
+    await row.getByRole('button', { name: `Change role of ${engineer.name}` }).click();
+    await row.getByRole('radio', { name: 'Owner' }).click();
+    const confirm = row.getByTestId(`role-confirm-${engineer.email}`);
+    await confirm.waitFor();
+    await expect(confirm.innerText()).resolves.toContain('invite people, change roles (their own too) and remove members');
+    await expect(confirm.getByTestId('role-confirm-owner-note').innerText()).resolves.toContain('could then change your role or remove you');
+    await screenshot(page, `team-sites-${tag}-05e-role-confirm`);
+    const role = async () =>
+      ((await server.db('memberships as m').join('users as u', 'u.id', 'm.user_id').where('u.email', engineer.email).first('m.role')) as { role: string }).role;
+    expect(await role()).toBe('engineer');
+    await row.getByRole('button', { name: `Keep ${engineer.name} as Engineer` }).click();
+    await confirm.waitFor({ state: 'detached' });
+    expect(await role()).toBe('engineer');
     assertNoCspViolations(page);
     assertNoPageErrors(page);
   });

@@ -57,7 +57,7 @@ export function AppShell({ teamName, userName, navigation = true, children }: Ap
                 aria-current={active ? 'page' : undefined}
                 style={StyleSheet.flatten([styles.railItem, active && styles.railItemActive])}
               >
-                <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+                <Icon name={d.icon} tone={active ? 'selected' : 'textMuted'} />
                 <Text weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'}>
                   {d.label}
                 </Text>
@@ -82,7 +82,7 @@ export function AppShell({ teamName, userName, navigation = true, children }: Ap
           <Link key={d.href} href={d.href} asChild>
             <Pressable role="link" aria-current={active ? 'page' : undefined} style={styles.barItem}>
               <View style={[styles.barPill, active && styles.barPillActive]}>
-                <Icon name={d.icon} tone={active ? 'heat' : 'textMuted'} />
+                <Icon name={d.icon} tone={active ? 'selected' : 'textMuted'} />
               </View>
               <Text variant="caption" weight={active ? 'semibold' : 'regular'} tone={active ? 'text' : 'textMuted'} numberOfLines={1}>
                 {d.label}
@@ -128,7 +128,7 @@ const styles = StyleSheet.create({
     borderLeftWidth: 3,
     borderLeftColor: 'transparent',
   },
-  railItemActive: { backgroundColor: colors.surface, borderLeftColor: colors.heat },
+  railItemActive: { backgroundColor: colors.surface, borderLeftColor: colors.selected },
   railUser: { marginTop: 'auto', paddingHorizontal: spacing.sm, paddingBottom: spacing.xl },
   wideContent: { flex: 1 },
   phoneRoot: { flex: 1, backgroundColor: colors.background },
@@ -142,5 +142,5 @@ const styles = StyleSheet.create({
   },
   barItem: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: spacing.xxs, paddingVertical: spacing.xs, minHeight: BOTTOM_BAR_HEIGHT },
   barPill: { paddingHorizontal: spacing.md, paddingVertical: spacing.xxs, borderRadius: radius.pill },
-  barPillActive: { backgroundColor: colors.heatSoft },
+  barPillActive: { backgroundColor: colors.selectedSoft },
 });

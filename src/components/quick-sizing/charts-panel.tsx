@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { formatSignificant, formatTemperature, formatThickness } from '../../calc/format';
 import type { LiveOutput } from '../../calc/live';
-import { heatQuantity } from '../../calc/present';
+import { heatQuantity, touchSafetyOf } from '../../calc/present';
 import { limitValue, type Draft } from '../../calc/quick-case';
 import { type UnitSystem, toDisplay, unitOf } from '../../calc/units';
 import { colors, spacing } from '../../theme';
@@ -33,7 +33,13 @@ export function ChartsPanel({ draft: d, output: o, system, wide }: ChartsPanelPr
   const sweep = o.sweep;
 
   let surfaceLimit: { y: number; label: string; tone: 'heat' | 'cold' } | null = null;
-  if (d.purpose === 'personnel' && lim !== null) surfaceLimit = { y: T(lim), label: `limit ${formatTemperature(lim, system).text}`, tone: 'heat' };
+  if (d.purpose === 'personnel' && lim !== null) {
+    // The limit that governs the touch verdict: the one entered, or a stricter burn threshold.
+    const touch = touchSafetyOf(d, o.result, system).verdict;
+    const governing = touch.regime === 'hot' ? touch.limitC : lim;
+    const why = touch.regime === 'hot' && touch.governs === 'burnThreshold' ? ' (burn threshold)' : '';
+    surfaceLimit = { y: T(governing), label: `limit ${formatTemperature(governing, system).text}${why}`, tone: 'heat' };
+  }
   if (d.purpose === 'condensation' && lim !== null && o.result.dewPointC !== undefined) {
     surfaceLimit = { y: T(o.result.dewPointC + lim), label: `dew point + margin ${formatTemperature(o.result.dewPointC + lim, system).text}`, tone: 'cold' };
   }

@@ -40,7 +40,7 @@ export function CoefficientFields({ layer, system, value, onChange, errors, test
   const T = tUnit.suffix;
   const pow = (j: number) => (j === 1 ? '' : j === 2 ? '²' : j === 3 ? '³' : `^${j}`);
   const spokenPow = (j: number) => (j === 1 ? '' : j === 2 ? ' squared' : j === 3 ? ' cubed' : ` to the power ${j}`);
-  const labels = texts.map((_, j) => (j === 0 ? `k at 0 ${T}` : `c${j}, per ${T}${pow(j)}`));
+  const labels = texts.map((_, j) => (j === 0 ? `Conductivity at 0 ${T} (c0)` : `c${j}, per ${T}${pow(j)}`));
   const units = texts.map((_, j) => (j === 0 ? k : `${k}/${T}${pow(j)}`));
   const unitsSpoken = texts.map((_, j) => (j === 0 ? kUnit.spoken : `${kUnit.spoken} per ${tUnit.spoken}${spokenPow(j)}`));
 

@@ -1,10 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 
+import { currencySymbol, fixed } from '../../calc/format';
 import { finishById, finishes, materialById, materials, pipeSizeByOuterDiameter, pipeSizes, thicknessSeries } from '../../calc/library';
+import { temperaturesInText } from '../../calc/calc-messages';
+import { materialNameIn, type ServiceLimitBreach } from '../../calc/present';
 import {
   CONTACT_MATERIALS,
   PURPOSES,
   PURPOSE_TRADE_TERMS,
+  isColdService,
   limitKey,
   purposeAvailable,
   type Draft,
@@ -14,23 +18,26 @@ import {
 import type { FieldErrors } from '../../calc/validation';
 import { unitOf, type Quantity, type UnitSystem } from '../../calc/units';
 import { spacing } from '../../theme';
-import { Button, Card, Text, TextField } from '../ui';
+import { Button, Card, SelectField, Text, TextField, type SelectOption } from '../ui';
+
+import { VerdictBadge } from './result-value';
 
 import { CoefficientFields } from './coefficient-fields';
 import { NumberField } from './number-field';
 import { OptionChips, type ChipOption } from './option-chips';
-import { SelectField, type SelectOption } from './select-field';
 
 export interface InputsPanelProps {
   draft: Draft;
   system: UnitSystem;
   errors: FieldErrors;
   onChange: (patch: Partial<Draft>) => void;
+  /** Layers run outside their service temperatures, shown at the layer. */
+  serviceLimits?: readonly ServiceLimitBreach[];
 }
 
 const MAX_LAYERS = 3;
 
-type EnergyNumberKey = 'operatingHoursPerYear' | 'pricePerKWh' | 'efficiency' | 'co2KgPerKWh';
+type EnergyNumberKey = 'operatingHoursPerYear' | 'pricePerKWh' | 'efficiency' | 'co2KgPerKWh' | 'coolingCop' | 'electricityPricePerKWh' | 'electricityCo2KgPerKWh';
 
 type Options<K extends keyof Draft> = readonly ChipOption<Draft[K] & string>[];
 
@@ -73,10 +80,28 @@ const CURRENCY_OPTIONS: readonly ChipOption<string>[] = [
   { value: 'GBP', label: 'GBP £' },
 ];
 
-const MATERIAL_OPTIONS: readonly SelectOption[] = [
-  ...materials.map((m) => ({ value: m.id, label: m.name, detail: m.maxServiceTemperatureC !== undefined ? `Service to ${m.maxServiceTemperatureC} °C` : undefined })),
-  { value: 'custom', label: 'Custom k(T)', detail: 'Enter the conductivity polynomial yourself' },
-];
+/** A service temperature in whole degrees of the units shown. */
+function degrees(celsius: number, system: UnitSystem): string {
+  const u = unitOf('temperature', system);
+  return `${fixed(u.fromSI(celsius), 0)} ${u.suffix}`;
+}
+
+/** The library's materials, named and rated in the units shown. */
+function materialOptions(system: UnitSystem): SelectOption[] {
+  return [
+    ...materials.map((m) => ({
+      value: m.id,
+      label: materialNameIn(m.name, system),
+      detail:
+        m.maxServiceTemperatureC === undefined
+          ? undefined
+          : m.minServiceTemperatureC !== undefined
+            ? `Service from ${degrees(m.minServiceTemperatureC, system)} to ${degrees(m.maxServiceTemperatureC, system)}`
+            : `Service to ${degrees(m.maxServiceTemperatureC, system)}`,
+    })),
+    { value: 'custom', label: 'Custom k(T)', detail: 'Enter the conductivity polynomial yourself' },
+  ];
+}
 const FINISH_OPTIONS: readonly SelectOption[] = [
   ...finishes.map((f) => ({ value: f.id, label: f.name, detail: `Emissivity ${f.emissivity}` })),
   { value: 'custom', label: 'Custom emissivity' },
@@ -85,17 +110,21 @@ const SERIES_OPTIONS: readonly SelectOption[] = thicknessSeries.map((s) => ({ va
 
 /** The limit field of each purpose, keyed by the draft field it fills. */
 const LIMIT_FIELDS: Partial<Record<keyof Draft, { label: string; quantity: Quantity; hint?: string }>> = {
-  maxSurfaceC: { label: 'Highest surface temperature allowed', quantity: 'temperature', hint: 'Often 55–60 °C for metal jackets within reach; your plant’s specification governs.' },
+  maxSurfaceC: {
+    label: 'Highest surface temperature allowed',
+    quantity: 'temperature',
+    hint: 'Often 55 °C to 60 °C for metal jackets within reach; your plant’s specification governs. A stricter burn threshold for the contact below governs instead.',
+  },
   maxHeatLossWPerM: { label: 'Most heat loss allowed per length', quantity: 'heatLossPerLength' },
   maxHeatFluxWPerM2: { label: 'Most heat loss allowed per area', quantity: 'heatFlux' },
   maxHeatLossW: { label: 'Most heat loss allowed, whole vessel', quantity: 'heatFlow' },
   condensationMarginK: { label: 'Margin above the dew point', quantity: 'temperatureDelta' },
   maxChangeK: { label: 'Largest temperature drop along the run', quantity: 'temperatureDelta' },
-  minHours: { label: 'Hours the standing water must stay above 0 °C', quantity: 'hours' },
+  minHours: { label: 'Hours the standing water must stay above freezing', quantity: 'hours' },
 };
 
 /** Every input of the quick-sizing case, grouped the way a person thinks about the job. */
-export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelProps) {
+export function InputsPanel({ draft: d, system, errors, onChange, serviceLimits = [] }: InputsPanelProps) {
   const num = (key: keyof Draft, label: string, quantity: Quantity, extra?: { hint?: string; testID?: string }) => (
     <NumberField
       label={label}
@@ -128,6 +157,8 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
   const available = purposeAvailable(d.purpose, d.kind);
   const purpose = PURPOSES.find((p) => p.id === d.purpose);
   const solvedIndex = d.mode === 'size' && available ? d.layers.length - 1 : -1;
+  const cold = isColdService(d);
+  const money = currencySymbol(d.energy.currency);
 
   return (
     <View style={styles.col}>
@@ -226,7 +257,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                 label={`Material, layer ${i + 1}`}
                 testID={`qs-input-layers[${i}].material`}
                 value={l.materialId}
-                options={MATERIAL_OPTIONS}
+                options={materialOptions(system)}
                 onChange={(id) => {
                   const m = materialById(id);
                   if (m) setLayer(i, { materialId: id, conductivity: [...m.conductivity], maxServiceTemperatureC: m.maxServiceTemperatureC ?? null });
@@ -238,6 +269,11 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
                   {provenance}
                 </Text>
               ) : null}
+              {serviceLimits
+                .filter((b) => b.layerIndex === i)
+                .map((b) => (
+                  <VerdictBadge key={b.kind} state="fail" text={b.text} testID={`qs-layer-${i}-service-limit`} />
+                ))}
               {custom ? (
                 <>
                   <CoefficientFields
@@ -328,7 +364,7 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           onChange={(purpose) => onChange({ purpose })}
         />
         <Text tone="textMuted" testID="qs-purpose-hint">
-          {`${purpose?.hint ?? ''} (${PURPOSE_TRADE_TERMS[d.purpose]})`}
+          {`${temperaturesInText(purpose?.hint ?? '', system)} (${PURPOSE_TRADE_TERMS[d.purpose]})`}
         </Text>
         {!available ? (
           <Text tone="caution" testID="qs-purpose-unavailable">
@@ -342,7 +378,9 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           options={MODE_OPTIONS}
           onChange={(mode) => onChange({ mode })}
         />
-        {available && limitField ? num(limit, limitField.label, limitField.quantity, { hint: limitField.hint, testID: 'qs-input-limit' }) : null}
+        {available && limitField
+          ? num(limit, limitField.label, limitField.quantity, { hint: limitField.hint && temperaturesInText(limitField.hint, system), testID: 'qs-input-limit' })
+          : null}
         {d.kind === 'pipe' && d.purpose === 'holding' ? (
           <>
             {num('runLengthM', 'Length of the run', 'length')}
@@ -363,7 +401,13 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           options={CONTACT_OPTIONS}
           onChange={(contactMaterial) => onChange({ contactMaterial })}
         />
-        {num('contactSeconds', 'Contact time', 'seconds', { hint: '5 s is the usual industrial basis; longer contact lowers the burn threshold.' })}
+        {cold ? (
+          <Text tone="textMuted" testID="qs-cold-contact-hint">
+            {temperaturesInText('Cold service: a touch is judged as cold contact (frostbite on metal from about −7 °C, ISO 13732-3), not against hot-surface burn thresholds.', system)}
+          </Text>
+        ) : (
+          num('contactSeconds', 'Contact time', 'seconds', { hint: '5 s is the usual industrial basis; longer contact lowers the burn threshold.' })
+        )}
       </Card>
 
       <Card title="Energy and money assumptions" subtitle="Defaults shown; change them to match your plant." testID="qs-section-assumptions">
@@ -382,10 +426,29 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
           options={CURRENCY_OPTIONS}
           onChange={(currency) => onChange({ energy: { ...d.energy, currency } })}
         />
-        {energyNum('pricePerKWh', 'Energy price (fuel as bought)', 'pricePerEnergy', currencySymbol(d.energy.currency))}
-        {energyNum('efficiency', 'Heat-source efficiency', 'fraction')}
-        {energyNum('co2KgPerKWh', 'CO₂ factor of the fuel', 'co2Factor')}
-        <TextField label="Basis of the CO₂ factor" value={d.energy.co2Basis} onChangeText={(co2Basis) => onChange({ energy: { ...d.energy, co2Basis } })} testID="qs-input-energy.co2Basis" />
+        {cold ? (
+          <>
+            <Text tone="textMuted" testID="qs-cooling-note">
+              Cold service: the heat gained is removed by a chiller, so it is costed as the chiller’s electricity.
+            </Text>
+            {energyNum('coolingCop', 'Chiller coefficient of performance (COP)', 'ratio')}
+            {energyNum('electricityPricePerKWh', 'Electricity price', 'pricePerEnergy', money)}
+            {energyNum('electricityCo2KgPerKWh', 'CO₂ factor of electricity', 'co2Factor')}
+            <TextField
+              label="Basis of the electricity CO₂ factor"
+              value={d.energy.electricityCo2Basis}
+              onChangeText={(electricityCo2Basis) => onChange({ energy: { ...d.energy, electricityCo2Basis } })}
+              testID="qs-input-energy.electricityCo2Basis"
+            />
+          </>
+        ) : (
+          <>
+            {energyNum('pricePerKWh', 'Energy price (fuel as bought)', 'pricePerEnergy', money)}
+            {energyNum('efficiency', 'Heat-source efficiency', 'fraction')}
+            {energyNum('co2KgPerKWh', 'CO₂ factor of the fuel', 'co2Factor')}
+            <TextField label="Basis of the CO₂ factor" value={d.energy.co2Basis} onChangeText={(co2Basis) => onChange({ energy: { ...d.energy, co2Basis } })} testID="qs-input-energy.co2Basis" />
+          </>
+        )}
       </Card>
     </View>
   );
@@ -397,10 +460,6 @@ export function InputsPanel({ draft: d, system, errors, onChange }: InputsPanelP
     if (p?.massPerMetreKg) patch.pipeMassKgPerM = Number(p.massPerMetreKg.toFixed(2));
     return patch;
   }
-}
-
-function currencySymbol(code: string): string {
-  return code === 'EUR' ? '€' : code === 'GBP' ? '£' : code === 'USD' ? '$' : `${code} `;
 }
 
 function padTo3(c: Num[]): Num[] {

@@ -1,11 +1,14 @@
 import { StyleSheet, View } from 'react-native';
 
-import type { CalcResult } from '../../../shared/calc/types';
+import type { CalcResult, Warning } from '../../../shared/calc/types';
 import { spacing } from '../../theme';
 import { Banner, Card, Text } from '../ui';
 
-/** How the numbers were made, what to watch out for, and whose judgement governs. */
-export function MethodPanel({ result }: { result: CalcResult | null }) {
+/**
+ * How the numbers were made, what to watch out for, and whose judgement governs. `warnings` are the calculation's
+ * warnings in the form's words and units (see src/calc/calc-messages.ts).
+ */
+export function MethodPanel({ result, warnings = [] }: { result: CalcResult | null; warnings?: readonly Warning[] }) {
   const method = result?.method ?? [];
   return (
     <Card title="Method and cautions" testID="qs-method">
@@ -37,9 +40,9 @@ export function MethodPanel({ result }: { result: CalcResult | null }) {
         </Text>
         <Text>• Outdoors, a clear night sky can be much colder than the air: cold surfaces may run below the dew point even when this says otherwise.</Text>
       </View>
-      {result && result.warnings.length > 0 ? (
+      {warnings.length > 0 ? (
         <Banner tone="caution" title="Check these" testID="qs-warnings">
-          {result.warnings.map((w) => (
+          {warnings.map((w) => (
             <Text key={w.code + w.message} {...({ dataSet: { code: w.code } } as object)}>
               {`• ${w.message}`}
             </Text>

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 
-import { type Quantity, type UnitSystem, formatInputNumber, parseNumber, unitOf } from '../../calc/units';
+import { type Quantity, type UnitSystem, formatInputValue, parseNumber, unitOf } from '../../calc/units';
 import { TextField } from '../ui';
 
 export interface NumberFieldProps {
@@ -28,7 +28,7 @@ const same = (a: number | null, b: number | null) =>
  */
 export function NumberField({ label, quantity, system, value, onChange, error, hint, unitPrefix, testID, disabled }: NumberFieldProps) {
   const unit = unitOf(quantity, system);
-  const show = (si: number | null) => (si === null ? '' : formatInputNumber(unit.fromSI(si)));
+  const show = (si: number | null) => (si === null ? '' : formatInputValue(quantity, system, si));
   // What the field shows, and the SI value and system it was drawn from. When the value changes from
   // outside or the unit system switches, the text is redrawn from SI during render (no effect needed).
   const [shown, setShown] = useState(() => ({ si: value, system, text: show(value) }));
@@ -51,7 +51,7 @@ export function NumberField({ label, quantity, system, value, onChange, error, h
       keyboardType="numbers-and-punctuation"
       hint={hint}
       editable={!disabled}
-      error={notNumber ? `Enter ${label.toLowerCase()} as a number.` : error}
+      error={notNumber ? `Enter ${label.charAt(0).toLowerCase()}${label.slice(1)} as a number.` : error}
       testID={testID}
       onChangeText={(t) => {
         const n = parseNumber(t);

@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 
 import { colors, radius, spacing } from '../../theme';
-import { Text, focusRing } from '../ui';
+import { Text, focusRing, useRadioKeys } from '../ui';
 
 export type ChipOption<T extends string> = { value: T; label: string; disabled?: boolean; note?: string };
 
@@ -14,17 +14,25 @@ export interface OptionChipsProps<T extends string> {
   testID?: string;
 }
 
-/** A compact single choice shown as chips; a choice can be unavailable with a reason. */
+/**
+ * A compact single choice shown as chips; a choice can be unavailable with a reason. A radio group for the
+ * keyboard: Tab reaches the checked chip, the arrow keys move and check, Space checks.
+ */
 export function OptionChips<T extends string>({ label, value, options, onChange, testID }: OptionChipsProps<T>) {
+  const keys = useRadioKeys(options, value, onChange);
   return (
     <View style={styles.wrap}>
       <Text variant="label">{label}</Text>
       <View role="radiogroup" aria-label={label} style={styles.row}>
-        {options.map((o) => {
+        {options.map((o, i) => {
           const selected = o.value === value;
           return (
             <Pressable
               key={o.value}
+              ref={keys.ref(i)}
+              tabIndex={keys.tabIndex(i)}
+              // react-native-web passes key events to the element; React Native's types do not list them.
+              {...({ onKeyDown: keys.onKeyDown(i) } as object)}
               role="radio"
               aria-checked={selected}
               aria-disabled={o.disabled || undefined}
@@ -39,7 +47,7 @@ export function OptionChips<T extends string>({ label, value, options, onChange,
                 (state as { focused?: boolean }).focused && focusRing,
               ]}
             >
-              <Text weight={selected ? 'semibold' : 'regular'} tone={selected ? 'heat' : 'text'}>
+              <Text weight={selected ? 'semibold' : 'regular'} tone="text">
                 {selected ? `✓ ${o.label}` : o.label}
               </Text>
               {o.note ? (
@@ -68,6 +76,7 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
     backgroundColor: colors.surface,
   },
-  selected: { borderColor: colors.heat, backgroundColor: colors.heatSoft },
+  // Ink border, a tint and a check mark: a choice, never the heat or danger colours.
+  selected: { borderColor: colors.selected, borderWidth: 2, backgroundColor: colors.selectedSoft },
   disabled: { opacity: 0.6, borderStyle: 'dashed' },
 });

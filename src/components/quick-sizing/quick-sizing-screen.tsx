@@ -5,7 +5,7 @@ import { useSession } from '../../api/session';
 import { decodeCaseQuery, encodeCaseQuery } from '../../calc/case-url';
 import { typicalConditions } from '../../calc/examples';
 import { present } from '../../calc/present';
-import { defaultDraft, draftFromCase, draftOptions, type Draft } from '../../calc/quick-case';
+import { defaultDraft, draftFromCase, draftOptions, standardSeriesId, type Draft } from '../../calc/quick-case';
 import type { UnitSystem } from '../../calc/units';
 import { useLiveCalc } from '../../calc/use-live-calc';
 import { breakpoints, spacing } from '../../theme';
@@ -19,7 +19,7 @@ import { OptionChips } from './option-chips';
 import { ResultsPanel } from './results-panel';
 import { SummaryBar } from './summary-bar';
 
-const SUMMARY_BAR_SPACE = 88;
+const SUMMARY_BAR_SPACE = 112;
 
 const UNIT_OPTIONS = [
   { value: 'SI', label: 'SI' },
@@ -46,13 +46,28 @@ export function QuickSizingScreen() {
   const [linkRead, setLinkRead] = useState(false);
   const [copied, setCopied] = useState(false);
   const lastQuery = useRef<string | null>(null);
+  // The thickness series follows the unit system (millimetre steps in SI, half-inch steps in US customary)
+  // until the person picks one, or a link without units names one.
+  const [series, setSeries] = useState<{ follows: boolean; alignedFor: UnitSystem }>({ follows: true, alignedFor: 'SI' });
 
   // The link is read once, on the client (static pages are rendered without a URL).
   if (hydrated && !linkRead && typeof window !== 'undefined') {
     const decoded = decodeCaseQuery(window.location.search);
-    if (decoded.kind === 'ok') setDraft(draftFromCase(decoded.case, decoded.options));
-    else if (decoded.kind === 'invalid') setLinkProblem(decoded.message);
+    if (decoded.kind === 'ok') {
+      setDraft(draftFromCase(decoded.case, decoded.options));
+      if (decoded.units) {
+        setOverride(decoded.units);
+        setSeries({ follows: true, alignedFor: decoded.units });
+      } else {
+        setSeries({ follows: false, alignedFor: system });
+      }
+    } else if (decoded.kind === 'invalid') setLinkProblem(decoded.message);
     setLinkRead(true);
+  }
+  if (linkRead && series.follows && series.alignedFor !== system) {
+    const from = standardSeriesId(series.alignedFor);
+    setSeries({ follows: true, alignedFor: system });
+    setDraft((d) => (d.energy.seriesId === from ? { ...d, energy: { ...d.energy, seriesId: standardSeriesId(system) } } : d));
   }
 
   const { output, pending, forDraft } = useLiveCalc(draft, system);
@@ -64,20 +79,26 @@ export function QuickSizingScreen() {
     // Only a result of the current draft may write the link (a shared link is not overwritten by the
     // starting case while its own result is on its way).
     if (!linkRead || typeof window === 'undefined' || output.kind === 'invalid' || forDraft !== draft) return;
-    const query = encodeCaseQuery(output.case, draftOptions(draft));
+    const query = encodeCaseQuery(output.case, draftOptions(draft), system);
     if (query === lastQuery.current) return;
     lastQuery.current = query;
     window.history.replaceState(window.history.state, '', `${window.location.pathname}?${query}`);
-  }, [output, draft, forDraft, linkRead]);
+  }, [output, draft, forDraft, linkRead, system]);
 
-  const onChange = useCallback((patch: Partial<Draft>) => {
-    setCopied(false);
-    setDraft((d) => ({ ...d, ...patch }));
-  }, []);
+  const currentSeries = draft.energy.seriesId;
+  const onChange = useCallback(
+    (patch: Partial<Draft>) => {
+      setCopied(false);
+      // A series picked by hand stays, whatever the units.
+      if (patch.energy && patch.energy.seriesId !== currentSeries) setSeries((s) => ({ ...s, follows: false }));
+      setDraft((d) => ({ ...d, ...patch }));
+    },
+    [currentSeries],
+  );
 
   const copyLink = async () => {
     try {
-      const query = output.kind === 'invalid' ? '' : `?${encodeCaseQuery(output.case, draftOptions(draft))}`;
+      const query = output.kind === 'invalid' ? '' : `?${encodeCaseQuery(output.case, draftOptions(draft), system)}`;
       await navigator.clipboard.writeText(`${window.location.origin}${window.location.pathname}${query}`);
       setCopied(true);
     } catch {
@@ -88,7 +109,7 @@ export function QuickSizingScreen() {
   const errors = output.kind === 'invalid' ? output.errors : {};
   const inputs = (
     <View style={styles.stack}>
-      <InputsPanel draft={draft} system={system} errors={errors} onChange={onChange} />
+      <InputsPanel draft={draft} system={system} errors={errors} onChange={onChange} serviceLimits={presentation?.serviceLimits} />
       <Button
         label="Use typical conditions for this purpose"
         variant="secondary"
@@ -101,7 +122,7 @@ export function QuickSizingScreen() {
     <View style={styles.stack}>
       <ResultsPanel output={output} presentation={presentation} pending={pending} signedIn={signedIn} />
       {output.kind === 'ok' ? <ChartsPanel draft={draft} output={output} system={system} wide={large} /> : null}
-      <MethodPanel result={output.kind === 'ok' ? output.result : null} />
+      <MethodPanel result={output.kind === 'ok' ? output.result : null} warnings={presentation?.warnings} />
     </View>
   );
 

@@ -29,40 +29,43 @@ export function ResultsPanel({ output, presentation: p, pending, signedIn }: Res
     );
   }
   if (output.kind === 'error') {
-    const impossible = output.code === 'TARGET_NOT_REACHABLE';
     return (
-      <Banner tone="fail" title={impossible ? 'No thickness reaches this target' : 'The calculation refused this case'} testID="qs-calc-error" {...({ dataSet: { code: output.code, field: output.field } } as object)}>
+      <Banner tone="fail" title="The calculation refused this case" testID="qs-calc-error" {...({ dataSet: { code: output.code, field: output.formField ?? '' } } as object)}>
         <Text>{output.message}</Text>
-        {output.advice.length > 0 ? (
-          <View style={styles.list}>
-            <Text weight="semibold">What would help:</Text>
-            {output.advice.map((a) => (
-              <Text key={a}>{`• ${a}`}</Text>
-            ))}
-          </View>
-        ) : null}
-        {!impossible && output.field ? <Text tone="textMuted">{`Field: ${output.field}`}</Text> : null}
       </Banner>
     );
   }
   if (!p) return null;
+  const shortfall = output.kind === 'ok' ? output.shortfall : null;
   return (
     <View style={styles.col} testID="qs-results" {...({ dataSet: { pending: pending ? 'true' : 'false' } } as object)}>
       <Card title="Results" subtitle={pending ? 'Updating…' : 'Live: they follow every change.'}>
         <VerdictBadge state={p.verdict.state} text={p.verdict.text} testID="qs-verdict" />
+        {shortfall ? (
+          <View style={styles.list} testID="qs-shortfall" {...({ dataSet: { code: shortfall.code } } as object)}>
+            <Text weight="semibold">What would help:</Text>
+            {shortfall.advice.map((a) => (
+              <Text key={a}>{`• ${a}`}</Text>
+            ))}
+            <Text tone="textMuted">The figures below and the charts are for the best build-up within reach.</Text>
+          </View>
+        ) : null}
+        {p.serviceLimits.map((b) => (
+          <VerdictBadge key={`${b.layerIndex}-${b.kind}`} state="fail" text={b.text} testID={`qs-service-limit-${b.layerIndex}`} />
+        ))}
         <View style={styles.grid}>
           {p.headline.map((s) => (
             <ResultValue key={s.testID} label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />
           ))}
         </View>
-        {p.burn ? (
-          <View style={styles.list}>
-            <VerdictBadge state={p.burn.state} text={p.burn.text} testID="qs-result-burn" />
-            <View style={styles.grid}>
-              <ResultValue size="medium" label={p.burn.threshold.label} value={p.burn.threshold.value} si={p.burn.threshold.si} note={p.burn.threshold.note} testID={p.burn.threshold.testID} />
-            </View>
+        <View style={styles.list}>
+          {p.touch ? <VerdictBadge state={p.touch.state} text={`Touch safety: ${p.touch.text}`} testID="qs-touch" /> : null}
+          <View style={styles.grid} testID="qs-touch-facts">
+            {p.touchFacts.map((s) => (
+              <ResultValue key={s.testID} size="medium" label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />
+            ))}
           </View>
-        ) : null}
+        </View>
         <View style={styles.grid}>
           {p.details.map((s) => (
             <ResultValue key={s.testID} size="medium" label={s.label} value={s.value} si={s.si} note={s.note} testID={s.testID} />

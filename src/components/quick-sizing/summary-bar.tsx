@@ -11,8 +11,11 @@ import { VERDICT_WORD, type VerdictState } from './result-value';
 export function SummaryBar({ output, presentation: p }: { output: LiveOutput; presentation: Presentation | null }) {
   let body: React.ReactNode;
   let state: VerdictState;
+  let reason: string | null = null;
   if (p) {
-    state = p.verdict.state;
+    // The worst of the purpose, touch safety and the layers' service limits: a pass never hides a fail.
+    state = p.overall.state;
+    reason = p.overall.text;
     // The purpose's own answer (end of run, hours to 0 °C) goes before heat loss when there is one.
     const items = p.headline.length > 3 ? [p.headline[0], p.headline[1], p.headline[p.headline.length - 1]] : p.headline.slice(0, 3);
     body = (
@@ -33,7 +36,7 @@ export function SummaryBar({ output, presentation: p }: { output: LiveOutput; pr
     state = 'fail';
     body = (
       <Text weight="semibold" tone="fail">
-        {output.kind === 'invalid' ? 'Fix the marked inputs to see results.' : output.kind === 'error' && output.code === 'TARGET_NOT_REACHABLE' ? 'No thickness reaches this target.' : 'This case cannot be calculated.'}
+        {output.kind === 'invalid' ? 'Fix the marked inputs to see results.' : 'This case cannot be calculated.'}
       </Text>
     );
   }
@@ -45,7 +48,14 @@ export function SummaryBar({ output, presentation: p }: { output: LiveOutput; pr
           {VERDICT_WORD[state]}
         </Text>
       </View>
-      {body}
+      <View style={styles.main}>
+        {body}
+        {reason ? (
+          <Text variant="caption" tone={state === 'pass' ? 'textMuted' : state} weight={state === 'pass' ? 'regular' : 'semibold'} numberOfLines={2} testID="qs-summary-reason">
+            {reason}
+          </Text>
+        ) : null}
+      </View>
     </View>
   );
 }
@@ -62,7 +72,8 @@ const styles = StyleSheet.create({
     borderTopColor: colors.borderStrong,
   },
   verdict: { alignItems: 'center', width: 52 },
-  row: { flex: 1, flexDirection: 'row', gap: spacing.md },
+  main: { flex: 1, minWidth: 0, gap: spacing.xxs },
+  row: { flexDirection: 'row', gap: spacing.md },
   item: { flex: 1, minWidth: 0 },
   value: { fontSize: 18, lineHeight: 24 },
 });

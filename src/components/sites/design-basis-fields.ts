@@ -1,9 +1,19 @@
-import { sitePatchSchema, type SitePatchInput } from '../../../shared/schemas/sites';
+import {
+  BASIS_RANGES,
+  BASIS_TITLES,
+  designBasisWarnings,
+  sitePatchSchema,
+  type BasisKey,
+  type BasisRange,
+  type SitePatchInput,
+} from '../../../shared/schemas/sites';
 import type { DesignBases, SiteDetail } from '../../api/types';
-import { formatInputNumber, fromDisplay, parseNumber, toDisplay, unitOf, type Quantity, type UnitSystem } from '../../calc/units';
+import { temperaturesInText } from '../../calc/calc-messages';
+import { fixed } from '../../calc/format';
+import { formatInputNumber, formatInputValue, fromDisplay, parseNumber, toDisplay, unitOf, type Quantity, type UnitSystem } from '../../calc/units';
 import { validateWithSchema } from '../forms/validate';
 
-export type BasisKey = 'touch' | 'energy' | 'condensation';
+export type { BasisKey };
 
 export interface BasisField {
   key: string;
@@ -25,11 +35,11 @@ export interface BasisSpec {
 const AIR_TEMPERATURE: BasisField = { key: 'airTemperatureC', label: 'Air temperature', quantity: 'temperature', required: true };
 const WIND_SPEED: BasisField = { key: 'windSpeedMS', label: 'Wind speed', quantity: 'speed' };
 
-/** The three design bases of a site, in the order a practitioner reads them. */
+/** The design bases of a site, in the order a practitioner reads them. */
 export const BASES: readonly BasisSpec[] = [
   {
     key: 'touch',
-    title: 'Touch safety',
+    title: BASIS_TITLES.touch,
     purpose: 'Hottest credible air, still air and the worst emissivity: personnel protection is sized against these.',
     fields: [
       AIR_TEMPERATURE,
@@ -41,8 +51,9 @@ export const BASES: readonly BasisSpec[] = [
   },
   {
     key: 'energy',
-    title: 'Energy',
-    purpose: 'Annual-average air and wind with the economics that heat conservation and the totals use.',
+    title: BASIS_TITLES.energy,
+    purpose:
+      'Annual-average air and wind with the economics that heat conservation and the totals use. A heat loss is made up by the heat source; on cold service a heat gain is removed by a chiller, costed as its electricity.',
     fields: [
       AIR_TEMPERATURE,
       WIND_SPEED,
@@ -52,11 +63,15 @@ export const BASES: readonly BasisSpec[] = [
       { key: 'heatSourceEfficiency', label: 'Heat-source efficiency', quantity: 'fraction' },
       { key: 'co2KgPerKWh', label: 'CO₂ factor', quantity: 'co2Factor' },
       { key: 'co2Basis', label: 'Basis of the CO₂ factor' },
+      { key: 'coolingCop', label: 'Chiller COP (cold service)', quantity: 'ratio' },
+      { key: 'electricityPricePerKWh', label: 'Electricity price (cold service)', quantity: 'pricePerEnergy' },
+      { key: 'electricityCo2KgPerKWh', label: 'CO₂ factor of electricity', quantity: 'co2Factor' },
+      { key: 'electricityCo2Basis', label: 'Basis of the electricity CO₂ factor' },
     ],
   },
   {
     key: 'condensation',
-    title: 'Condensation',
+    title: BASIS_TITLES.condensation,
     purpose: 'Air and humidity around cold lines; their surfaces must stay above the dew point by the margin.',
     fields: [
       AIR_TEMPERATURE,
@@ -64,7 +79,18 @@ export const BASES: readonly BasisSpec[] = [
       { key: 'marginK', label: 'Margin above dew point', quantity: 'temperatureDelta' },
     ],
   },
+  {
+    key: 'winter',
+    title: BASIS_TITLES.winter,
+    purpose: 'Coldest design conditions, used for frost protection and process temperature holding.',
+    fields: [AIR_TEMPERATURE, WIND_SPEED],
+  },
 ];
+
+/** The credible and usual range of a basis value, when it is a number with one. */
+export function rangeOf(basis: BasisKey, key: string): BasisRange | undefined {
+  return (BASIS_RANGES[basis] as Record<string, BasisRange>)[key];
+}
 
 /** Flat form field names: Formik reads dots as nesting, so "touch_airTemperatureC". */
 export const fieldName = (basis: BasisKey, key: string) => `${basis}_${key}`;
@@ -85,9 +111,20 @@ export function displayValue(field: BasisField, raw: unknown, system: UnitSystem
   if (raw === undefined || raw === null || raw === '') return null;
   if (!field.quantity || typeof raw !== 'number') return String(raw);
   const unit = unitOf(field.quantity, system);
-  const text = formatInputNumber(toDisplay(field.quantity, system, raw), 4);
-  const prefix = field.quantity === 'pricePerEnergy' && typeof currency === 'string' && currency ? currency : '';
-  return unit.suffix ? `${text} ${prefix}${unit.suffix}` : text;
+  const number = unit.inputDecimals !== undefined ? formatInputValue(field.quantity, system, raw) : formatInputNumber(toDisplay(field.quantity, system, raw), 4);
+  // A figure to read, not to edit: a true minus sign.
+  const text = number.replace(/^-/, '−');
+  const suffix = unitSuffix(field, system, currency);
+  return suffix ? `${text} ${suffix}` : text;
+}
+
+/** The unit shown after a basis value: a price carries its currency ("EUR/kWh"). */
+export function unitSuffix(field: BasisField, system: UnitSystem, currency?: unknown): string {
+  if (!field.quantity) return '';
+  const unit = unitOf(field.quantity, system);
+  const code = typeof currency === 'string' && /^[A-Z]{3}$/.test(currency) ? currency : '';
+  if (field.quantity === 'pricePerEnergy') return code ? `${code}${unit.suffix}` : `currency${unit.suffix}`;
+  return unit.suffix;
 }
 
 export function siteToForm(site: Pick<SiteDetail, 'name' | 'description' | 'designBases'>, system: UnitSystem): SiteFormValues {
@@ -96,7 +133,7 @@ export function siteToForm(site: Pick<SiteDetail, 'name' | 'description' | 'desi
     for (const f of b.fields) {
       const raw = basisValue(site.designBases ?? {}, b.key, f.key);
       values[fieldName(b.key, f.key)] =
-        raw === undefined || raw === null ? '' : f.quantity && typeof raw === 'number' ? formatInputNumber(toDisplay(f.quantity, system, raw)) : String(raw);
+        raw === undefined || raw === null ? '' : f.quantity && typeof raw === 'number' ? formatInputValue(f.quantity, system, raw) : String(raw);
     }
   }
   return values;
@@ -104,12 +141,56 @@ export function siteToForm(site: Pick<SiteDetail, 'name' | 'description' | 'desi
 
 /** Server and schema paths (designBases.touch.airTemperatureC) → the form's field names. */
 export function formFieldOf(path: string): string {
-  const m = /^designBases\.(touch|energy|condensation)\.(\w+)$/.exec(path);
+  const m = /^designBases\.(touch|energy|condensation|winter)\.(\w+)$/.exec(path);
   return m ? fieldName(m[1] as BasisKey, m[2]) : path;
 }
 
 // Conversions back from US units leave float noise; 12 significant figures keep every typed digit.
 const clean = (x: number) => Number(x.toPrecision(12));
+
+/** A bound in the units shown ("140 °F", "2 EUR/kWh", "50 %"). */
+function boundText(f: BasisField, si: number, system: UnitSystem, currency?: unknown): string {
+  const q = f.quantity!;
+  const v = toDisplay(q, system, si);
+  const number = Math.abs(v) >= 100 ? fixed(v, 0) : formatInputNumber(v, 3).replace('-', '−');
+  const suffix = unitSuffix(f, system, currency);
+  return suffix ? `${number} ${suffix}` : number;
+}
+
+/**
+ * The refusal for a value outside its credible range, in the form's words and the user's units; null when it
+ * is inside. The server applies the same ranges (shared/schemas/sites.ts).
+ */
+function outOfRange(basis: BasisKey, f: BasisField, si: number, system: UnitSystem, currency?: unknown): string | null {
+  const r = rangeOf(basis, f.key);
+  if (!r || !f.quantity) return null;
+  const name = `${BASIS_TITLES[basis]}: ${f.label.toLowerCase()}`;
+  if (r.minExclusive ? !(si > r.min) : si < r.min) {
+    return `${name} must be ${r.minExclusive ? 'above' : 'at least'} ${boundText(f, r.min, system, currency)} (${r.why})`;
+  }
+  if (si > r.max) return `${name} must be at most ${boundText(f, r.max, system, currency)} (${r.why})`;
+  return null;
+}
+
+/**
+ * Warnings for values that are credible but unusual (accepted as they are), keyed by form field name and worded
+ * in the user's units.
+ */
+export function basisWarnings(values: SiteFormValues, system: UnitSystem, scope: EditScope): Record<string, string> {
+  const bases: Record<string, Record<string, number>> = {};
+  for (const b of BASES) {
+    if (scope === 'touch' && b.key !== 'touch') continue;
+    for (const f of b.fields) {
+      if (!f.quantity) continue;
+      const n = parseNumber(values[fieldName(b.key, f.key)] ?? '');
+      if (n === null) continue;
+      (bases[b.key] ??= {})[f.key] = clean(fromDisplay(f.quantity, system, n));
+    }
+  }
+  const out: Record<string, string> = {};
+  for (const w of designBasisWarnings(bases as DesignBases)) out[fieldName(w.basis, w.key)] = temperaturesInText(w.message, system);
+  return out;
+}
 
 /**
  * Turns the form into the PATCH body, in SI. A value the user left as it was keeps its stored SI
@@ -146,8 +227,14 @@ export function formToPatch(
         continue;
       }
       const n = parseNumber(text);
-      if (n === null) errors[name] = `${b.title}: ${f.label.toLowerCase()} must be a number`;
-      else out[f.key] = clean(fromDisplay(f.quantity, system, n));
+      if (n === null) {
+        errors[name] = `${b.title}: ${f.label.toLowerCase()} must be a number`;
+        continue;
+      }
+      const si = clean(fromDisplay(f.quantity, system, n));
+      const outside = outOfRange(b.key, f, si, system, values[fieldName(b.key, 'currency')] ?? stored.energy?.currency);
+      if (outside) errors[name] = outside;
+      else out[f.key] = si;
     }
     designBases[b.key] = out;
   }

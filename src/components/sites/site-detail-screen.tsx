@@ -15,6 +15,7 @@ import { Banner, Button, Card, EmptyState, Screen, Text, TextLink } from '../ui'
 
 import { BASES, displayValue, type BasisSpec, type EditScope } from './design-basis-fields';
 import { SiteEditForm } from './site-edit-form';
+import { SitePeoplePanel } from './site-people-panel';
 
 function BasisCard({ spec, site, system, onEdit }: { spec: BasisSpec; site: SiteDetail; system: UnitSystem; onEdit?: () => void }) {
   const basis = site.designBases?.[spec.key] as Record<string, unknown> | undefined;
@@ -51,15 +52,18 @@ function BasisCard({ spec, site, system, onEdit }: { spec: BasisSpec; site: Site
   );
 }
 
-function DeleteSite({ site }: { site: SiteDetail }) {
-  const [confirming, setConfirming] = useState(false);
+/**
+ * The delete confirmation, a full-width block under the actions (never squeezed into their row, so on a phone
+ * every word of it, "This cannot be undone" included, stays on the screen).
+ */
+function DeleteSiteConfirm({ site, onKeep }: { site: SiteDetail; onKeep: () => void }) {
   const [error, setError] = useState<string | null>(null);
   const del = useDeleteSite();
   const router = useRouter();
-  if (!confirming) return <Button label="Delete site" variant="danger" onPress={() => setConfirming(true)} testID="site-delete" />;
   return (
-    <Banner tone="caution" title={`Delete ${site.name}?`} testID="site-delete-confirm">
-      <Text>Its design bases and everything recorded under it go with it. This cannot be undone.</Text>
+    <Banner tone="caution" title={`Delete ${site.name}?`} testID="site-delete-confirm" style={styles.confirm}>
+      <Text>Its design bases and everything recorded under it go with it.</Text>
+      <Text weight="semibold">This cannot be undone.</Text>
       {error ? <Text tone="fail">{error}</Text> : null}
       <View style={styles.actions}>
         <Button
@@ -74,7 +78,7 @@ function DeleteSite({ site }: { site: SiteDetail }) {
             else setError(problemMessage(result));
           }}
         />
-        <Button label="Keep the site" variant="secondary" onPress={() => setConfirming(false)} />
+        <Button label="Keep the site" variant="secondary" onPress={onKeep} />
       </View>
     </Banner>
   );
@@ -84,6 +88,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
   const session = useSession();
   const site = useSite(id);
   const [editing, setEditing] = useState(false);
+  const [confirmingDelete, setConfirmingDelete] = useState(false);
   const role = session.data?.role;
   const system: UnitSystem = session.data?.settings?.unitSystem ?? 'SI';
   const scope: EditScope | null = can(role, 'site.edit') ? 'all' : can(role, 'site.editTouchBasis') ? 'touch' : null;
@@ -132,9 +137,12 @@ export function SiteDetailScreen({ id }: { id: string }) {
               {scope ? (
                 <Button label={scope === 'all' ? 'Edit site' : 'Edit touch-safety basis'} onPress={startEditing} testID="site-edit" />
               ) : null}
-              {can(role, 'site.delete') ? <DeleteSite site={s} /> : null}
+              {can(role, 'site.delete') && !confirmingDelete ? (
+                <Button label="Delete site" variant="danger" onPress={() => setConfirmingDelete(true)} testID="site-delete" />
+              ) : null}
             </View>
           ) : null}
+          {confirmingDelete && can(role, 'site.delete') ? <DeleteSiteConfirm site={s} onKeep={() => setConfirmingDelete(false)} /> : null}
           {!s.description ? (
             scope === 'all' ? (
               <EmptyState
@@ -153,6 +161,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
               </View>
             ))}
           </View>
+          {can(role, 'site.members') ? <SitePeoplePanel site={s} /> : null}
         </>
       )}
     </Screen>
@@ -162,6 +171,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
 const styles = StyleSheet.create({
   head: { gap: spacing.xs },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'flex-start' },
+  confirm: { alignSelf: 'stretch' },
   bases: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg, alignItems: 'flex-start' },
   basis: { flexGrow: 1, flexBasis: 320 },
   values: { borderTopWidth: 1, borderTopColor: colors.border },

@@ -37,7 +37,7 @@ export function SitesScreen({ bottomInset = 0 }: { bottomInset?: number }) {
               canCreate
                 ? undefined
                 : session.data?.role === 'contractor'
-                  ? 'You see the sites you are invited to; an owner or engineer can invite you to one.'
+                  ? 'You see only the sites you are added to; an owner or engineer adds you to one from its page, under People on this site.'
                   : 'An owner or engineer on your team can create the first site.'
             }
             testID="sites-empty"

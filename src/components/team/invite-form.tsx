@@ -6,7 +6,7 @@ import { useInviteMember } from '../../api/team';
 import { ROLES, roleDescriptions, roleLabels, type Role } from '../../api/types';
 import { spacing } from '../../theme';
 import { applyProblem, FormErrorBanner, type FormStatus, FormTextField, trimStrings, validateWithSchema } from '../forms';
-import { Banner, Button, Card, ChoiceGroup } from '../ui';
+import { Banner, Button, Card, ChoiceGroup, Text } from '../ui';
 
 type Values = { email: string; role: Role | '' };
 
@@ -49,6 +49,11 @@ export function InviteForm() {
                 error={form.submitCount > 0 ? form.errors.role : undefined}
                 testID="invite-role"
               />
+              {form.values.role === 'contractor' ? (
+                <Text variant="caption" tone="textMuted" testID="invite-contractor-note">
+                  A contractor sees only the sites they are added to: once they have joined, add them on each site’s page under People on this site.
+                </Text>
+              ) : null}
               <Button label="Send invitation" icon="mail" busy={form.isSubmitting} onPress={() => form.handleSubmit()} testID="invite-submit" />
             </View>
           );

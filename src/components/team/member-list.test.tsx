@@ -63,3 +63,42 @@ describe('MemberList removal', () => {
     expect(screen.queryByRole('button', { name: /^Remove / })).toBeNull();
   });
 });
+
+describe('MemberList role changes', () => {
+  const realFetch = globalThis.fetch;
+  afterEach(() => {
+    globalThis.fetch = realFetch;
+  });
+
+  it('when the owner picks a role, then nothing is sent until the change is confirmed, and the confirmation says what the role may do', async () => {
+    const fetchMock = jest.fn(() => answer(200, { member: { ...engineer, role: 'safety' } }));
+    globalThis.fetch = fetchMock as unknown as typeof fetch;
+    renderList(true);
+    fireEvent.click(screen.getByRole('button', { name: 'Change role of Bram Lindqvist' }));
+    fireEvent.click(screen.getByRole('radio', { name: 'Safety officer' }));
+    expect(fetchMock).not.toHaveBeenCalled();
+    const confirm = screen.getByTestId('role-confirm-bram@north-ridge.example');
+    expect(confirm.textContent).toContain('Make Bram Lindqvist a Safety officer?');
+    expect(confirm.textContent).toContain('edit the touch-safety basis of a site');
+    expect(confirm.textContent).toContain('Not: invite people, change roles');
+    fireEvent.click(screen.getByRole('button', { name: 'Yes, make Bram Lindqvist Safety officer' }));
+    await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
+    const [url, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
+    expect(url).toBe('/api/v1/team/members/2');
+    expect(init.method).toBe('PATCH');
+    expect(JSON.parse(String(init.body))).toEqual({ role: 'safety' });
+  });
+
+  it('when the owner proposes a promotion to owner, then the confirmation warns what an owner can do, and Cancel sends nothing', () => {
+    const fetchMock = jest.fn(() => answer(200, {}));
+    globalThis.fetch = fetchMock as unknown as typeof fetch;
+    renderList(true);
+    fireEvent.click(screen.getByRole('button', { name: 'Change role of Bram Lindqvist' }));
+    fireEvent.click(screen.getByRole('radio', { name: 'Owner' }));
+    expect(screen.getByTestId('role-confirm-owner-note').textContent).toContain('could then change your role or remove you');
+    expect(screen.getByTestId('role-confirm-bram@north-ridge.example').textContent).toContain('invite people, change roles (their own too) and remove members');
+    fireEvent.click(screen.getByRole('button', { name: 'Keep Bram Lindqvist as Engineer' }));
+    expect(screen.queryByTestId('role-confirm-bram@north-ridge.example')).toBeNull();
+    expect(fetchMock).not.toHaveBeenCalled();
+  });
+});

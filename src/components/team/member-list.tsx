@@ -6,26 +6,66 @@ import { useChangeRole, useRemoveMember } from '../../api/team';
 import { ROLES, roleLabels, type Member, type Role } from '../../api/types';
 import { colors, radius, spacing } from '../../theme';
 import { formatDate } from '../common/format';
-import { Banner, Button, Card, ChoiceGroup, Text } from '../ui';
+import { Banner, Button, Card, ChoiceGroup, Text, personRows } from '../ui';
+
+import { roleAbilities, roleLimits } from './role-abilities';
 
 const roleChoices = ROLES.map((r) => ({ value: r, label: roleLabels[r] }));
 
+/** What a change of role means, said before it is made. */
+function RoleChangeConfirm({ member, role, isSelf, busy, onConfirm, onCancel }: { member: Member; role: Role; isSelf: boolean; busy: boolean; onConfirm: () => void; onCancel: () => void }) {
+  const may = roleAbilities(role);
+  const mayNot = roleLimits(role);
+  const who = isSelf ? 'yourself' : member.name;
+  return (
+    <View style={styles.confirm} role="group" aria-label={`Confirm the role of ${member.name}`} testID={`role-confirm-${member.email}`}>
+      <Text weight="semibold">{`Make ${who} ${role === 'owner' || role === 'engineer' ? 'an' : 'a'} ${roleLabels[role]}?`}</Text>
+      <Text>{`${isSelf ? 'You' : 'They'} may then:`}</Text>
+      <View role="list">
+        {may.map((m) => (
+          <Text key={m} role="listitem">{`• ${m}`}</Text>
+        ))}
+      </View>
+      {mayNot.length > 0 ? <Text tone="textMuted">{`Not: ${mayNot.join('; ')}.`}</Text> : null}
+      {role === 'owner' ? (
+        <Text weight="semibold" tone="caution" testID="role-confirm-owner-note">
+          {`An owner has full control of the team: ${member.name} could then change your role or remove you. Give it only to someone you trust with the team.`}
+        </Text>
+      ) : null}
+      {isSelf && member.role === 'owner' && role !== 'owner' ? (
+        <Text weight="semibold" tone="caution">You will no longer be able to manage the team, and only another owner can give it back.</Text>
+      ) : null}
+      <View style={styles.rowActions}>
+        <Button label={`Make ${roleLabels[role]}`} busy={busy} onPress={onConfirm} aria-label={`Yes, make ${member.name} ${roleLabels[role]}`} />
+        <Button label="Cancel" variant="secondary" onPress={onCancel} aria-label={`Keep ${member.name} as ${roleLabels[member.role]}`} />
+      </View>
+    </View>
+  );
+}
+
 function MemberRow({ member, canManage, isSelf, onRemoved }: { member: Member; canManage: boolean; isSelf: boolean; onRemoved?: (self: boolean) => void }) {
   const [editing, setEditing] = useState(false);
+  const [proposed, setProposed] = useState<Role | null>(null);
   const [confirming, setConfirming] = useState(false);
   const [error, setError] = useState<{ title: string; message: string } | null>(null);
   const change = useChangeRole();
   const remove = useRemoveMember();
 
-  const pick = async (role: Role) => {
+  // Choosing a role only proposes it; nothing is sent until the change is confirmed.
+  const pick = (role: Role) => {
     setError(null);
-    if (role === member.role) {
+    setProposed(role === member.role ? null : role);
+  };
+
+  const confirmRole = async () => {
+    if (!proposed) return;
+    const result = await change.mutateAsync({ userId: member.userId, role: proposed });
+    if (result.kind === 'ok') {
+      setProposed(null);
       setEditing(false);
-      return;
+    } else {
+      setError({ title: 'Role not changed', message: problemMessage(result) });
     }
-    const result = await change.mutateAsync({ userId: member.userId, role });
-    if (result.kind === 'ok') setEditing(false);
-    else setError({ title: 'Role not changed', message: problemMessage(result) });
   };
 
   const confirmRemove = async () => {
@@ -82,8 +122,19 @@ function MemberRow({ member, canManage, isSelf, onRemoved }: { member: Member; c
       ) : null}
       {editing ? (
         <View style={styles.edit}>
-          <ChoiceGroup label={`Role of ${member.name}`} value={member.role} choices={roleChoices} onChange={(r) => void pick(r)} disabled={change.isPending} compact />
-          <Button label="Done" variant="secondary" onPress={() => setEditing(false)} />
+          <ChoiceGroup label={`Role of ${member.name}`} value={proposed ?? member.role} choices={roleChoices} onChange={pick} disabled={change.isPending} compact />
+          {proposed ? (
+            <RoleChangeConfirm member={member} role={proposed} isSelf={isSelf} busy={change.isPending} onConfirm={() => void confirmRole()} onCancel={() => setProposed(null)} />
+          ) : (
+            <Button
+              label="Done"
+              variant="secondary"
+              onPress={() => {
+                setProposed(null);
+                setEditing(false);
+              }}
+            />
+          )}
         </View>
       ) : null}
       {error ? <Banner tone="fail" title={error.title}>{error.message}</Banner> : null}
@@ -117,12 +168,8 @@ export function MemberList({ members, canManage, selfId, onRemoved }: MemberList
 }
 
 const styles = StyleSheet.create({
-  list: { gap: 0 },
-  row: { paddingVertical: spacing.md, borderTopWidth: 1, borderTopColor: colors.border, gap: spacing.sm },
-  rowHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', gap: spacing.sm },
-  who: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: spacing.xxs },
+  ...personRows,
+  rowActions: personRows.actions,
   roleTag: { paddingHorizontal: spacing.sm, paddingVertical: spacing.xxs, borderRadius: radius.pill, backgroundColor: colors.surfaceSunk },
-  rowActions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
   edit: { gap: spacing.sm },
-  confirm: { gap: spacing.sm, padding: spacing.md, borderRadius: radius.md, backgroundColor: colors.cautionSoft },
 });

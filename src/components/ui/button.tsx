@@ -17,16 +17,19 @@ export interface ButtonProps extends Omit<PressableProps, 'children' | 'style'> 
   style?: ViewStyle;
 }
 
-const look: Record<ButtonVariant, { bg: string; fg: 'onAccent' | 'text' | 'heat' | 'fail'; border: string }> = {
-  primary: { bg: colors.heat, fg: 'onAccent', border: colors.heat },
+// Primary actions are ink and quiet ones steel blue; only a destructive action is red, and it always carries
+// the delete icon as well, so danger never rests on a colour close to the selection or heat accents.
+const look: Record<ButtonVariant, { bg: string; fg: 'onAccent' | 'text' | 'link' | 'danger'; border: string }> = {
+  primary: { bg: colors.action, fg: 'onAccent', border: colors.action },
   secondary: { bg: colors.surface, fg: 'text', border: colors.borderStrong },
-  quiet: { bg: 'transparent', fg: 'heat', border: 'transparent' },
-  danger: { bg: colors.surface, fg: 'fail', border: colors.fail },
+  quiet: { bg: 'transparent', fg: 'link', border: 'transparent' },
+  danger: { bg: colors.danger, fg: 'onAccent', border: colors.danger },
 };
 
 /** A button with a visible keyboard focus ring and a busy state that keeps its size. */
-export function Button({ label, variant = 'primary', icon, busy, block, disabled, style, ...rest }: ButtonProps) {
+export function Button({ label, variant = 'primary', icon: iconName, busy, block, disabled, style, ...rest }: ButtonProps) {
   const l = look[variant];
+  const icon = iconName ?? (variant === 'danger' ? 'delete' : undefined);
   const inactive = disabled || busy;
   return (
     <Pressable
@@ -46,6 +49,7 @@ export function Button({ label, variant = 'primary', icon, busy, block, disabled
           { backgroundColor: l.bg, borderColor: l.border },
           block && styles.block,
           variant === 'quiet' && styles.quiet,
+          variant === 'danger' && styles.danger,
           (pressed || hovered) && !inactive && styles.pressed,
           inactive && styles.inactive,
           style,
@@ -87,6 +91,7 @@ const styles = StyleSheet.create({
   },
   block: { alignSelf: 'stretch' },
   quiet: { paddingHorizontal: spacing.sm },
+  danger: { borderWidth: 2 },
   row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   pressed: { opacity: 0.88 },
   inactive: { opacity: 0.55 },

@@ -2,6 +2,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 
 import { colors, radius, spacing } from '../../theme';
 
+import { useRadioKeys } from './radio-keys';
 import { Text } from './text';
 
 export interface Choice<T extends string> {
@@ -22,17 +23,25 @@ export interface ChoiceGroupProps<T extends string> {
   testID?: string;
 }
 
-/** A radio group: one choice, keyboard operable (Tab to a choice, Enter or Space to pick it). */
+/**
+ * A radio group: one choice, keyboard operable after the WAI-ARIA radio-group pattern (Tab reaches the group at
+ * the checked choice, the arrow keys move and check, Space checks).
+ */
 export function ChoiceGroup<T extends string>({ label, value, choices, onChange, error, disabled, compact, testID }: ChoiceGroupProps<T>) {
+  const keys = useRadioKeys(choices, value, onChange, disabled);
   return (
     <View style={styles.wrap} testID={testID}>
       <Text variant="label">{label}</Text>
       <View role="radiogroup" aria-label={label} style={compact ? styles.row : styles.column}>
-        {choices.map((choice) => {
+        {choices.map((choice, i) => {
           const selected = choice.value === value;
           return (
             <Pressable
               key={choice.value}
+              ref={keys.ref(i)}
+              tabIndex={keys.tabIndex(i)}
+              // react-native-web passes key events to the element; React Native's types do not list them.
+              {...({ onKeyDown: keys.onKeyDown(i) } as object)}
               role="radio"
               aria-checked={selected}
               aria-label={choice.description ? `${choice.label}. ${choice.description}` : choice.label}
@@ -84,7 +93,7 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
   },
   chip: { paddingVertical: spacing.xs },
-  selected: { borderColor: colors.heat, backgroundColor: colors.heatSoft },
+  selected: { borderColor: colors.selected, backgroundColor: colors.selectedSoft },
   disabled: { opacity: 0.55 },
   dot: {
     width: 18,
@@ -95,7 +104,7 @@ const styles = StyleSheet.create({
     alignItems: 'center',
     justifyContent: 'center',
   },
-  dotOn: { borderColor: colors.heat },
-  dotInner: { width: 8, height: 8, borderRadius: 4, backgroundColor: colors.heat },
+  dotOn: { borderColor: colors.selected },
+  dotInner: { width: 8, height: 8, borderRadius: 4, backgroundColor: colors.selected },
   texts: { flexShrink: 1 },
 });

@@ -13,7 +13,9 @@ export type IconName =
   | 'info'
   | 'mail'
   | 'plus'
-  | 'signout';
+  | 'signout'
+  | 'delete'
+  | 'people';
 
 export interface IconProps {
   name: IconName;
@@ -93,6 +95,20 @@ export function Icon({ name, size = 22, tone = 'text', label }: IconProps) {
         </>
       )}
       {name === 'plus' && <Path d="M12 5v14M5 12h14" {...stroke} />}
+      {name === 'delete' && (
+        <>
+          <Path d="M4 7h16M10 7V4.5h4V7" {...stroke} />
+          <Path d="M6 7l1 13h10l1-13" {...stroke} />
+          <Path d="M10 11v5M14 11v5" {...stroke} />
+        </>
+      )}
+      {name === 'people' && (
+        <>
+          <Circle cx={8} cy={9} r={2.75} {...stroke} />
+          <Circle cx={16} cy={9} r={2.75} {...stroke} />
+          <Path d="M3 19c0-2.8 2.2-5 5-5s5 2.2 5 5M11 19c0-2.8 2.2-5 5-5s5 2.2 5 5" {...stroke} />
+        </>
+      )}
       {name === 'signout' && (
         <>
           <Path d="M14 4H6v16h8" {...stroke} />

@@ -91,7 +91,7 @@ export function TextField({
             onPress={() => setRevealed((r) => !r)}
             style={styles.reveal}
           >
-            <Text variant="caption" weight="semibold" tone="heat">
+            <Text variant="caption" weight="semibold" tone="link">
               {revealed ? 'Hide' : 'Show'}
             </Text>
           </Pressable>

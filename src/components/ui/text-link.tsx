@@ -28,7 +28,7 @@ export function TextLink({ href, children, variant = 'body', style, testID }: Te
 
 const styles = StyleSheet.create({
   link: {
-    color: colors.heat,
+    color: colors.link,
     fontFamily: fonts.semibold,
     textDecorationLine: 'underline',
     ...tabularFigures,
