@@ -241,7 +241,10 @@ exports.seed = async function seed(knex) {
   for (const site of sites) {
     const services = SERVICES[site.name] ?? [];
     const bases = typeof site.design_bases === 'string' ? JSON.parse(site.design_bases) : site.design_bases;
-    const ctx = { bases, settings: sizing.toSizingSettings(null), library };
+    // The process unit's cold service is applied in layers of up to 150 mm (cellular glass), the others' 100 mm.
+    const stored = site.name === 'Process unit 2' ? { ...sizing.DEFAULT_SIZING_SETTINGS, maxSingleLayerMm: 150 } : null;
+    if (stored) await knex('sites').where({ id: site.id }).update({ sizing_settings: JSON.stringify(stored) });
+    const ctx = { bases, settings: sizing.toSizingSettings(stored), library };
     const indoor = site.name === 'Boiler house' || site.name === 'Chilled water';
     /** @type {{ write: any, task: import('../shared/calc/sizing').SizingTask }[]} */
     const rows = [];
@@ -261,7 +264,8 @@ exports.seed = async function seed(knex) {
         const params = {};
         if (s.holding) params.temperatureHolding = s.holding;
         if (s.frost) params.frostProtection = s.frost;
-        if (purposes.includes('heatConservation') && rnd() < 0.08) params.heatConservation = { maxHeatLossWPerM: Math.round(5 + rnd() * 10) };
+        // A few lines carry the client's own heat-loss limit: about 0.6 W/m per millimetre of pipe diameter.
+        if (purposes.includes('heatConservation') && rnd() < 0.08) params.heatConservation = { maxHeatLossWPerM: Math.round(0.6 * size.outerDiameterMm) };
         /** @type {import('../shared/calc/sizing').BuildUp | null} */
         let buildUp = null;
         let notes = '';
@@ -277,7 +281,7 @@ exports.seed = async function seed(knex) {
         } else if (s.t >= 300) {
           buildUp = { layers: [{ materialId: 'calcium-silicate-c533-type-i' }], finishId: 'aluminium-oxidised' };
         } else if (s.t < -20) {
-          buildUp = { layers: [{ materialId: 'cellular-glass-c552-grade-6' }], finishId: 'aluminium-oxidised' };
+          buildUp = { layers: [{ materialId: 'cellular-glass-c552-grade-6' }], finishId: 'mastic-or-canvas' };
         }
         const item = {
           kind: /** @type {'line'} */ ('line'),
@@ -330,7 +334,7 @@ exports.seed = async function seed(knex) {
       const buildUp = bare
         ? { layers: [], finishId: 'carbon-steel-oxidised', fixed: true }
         : t < -20
-          ? { layers: [{ materialId: 'cellular-glass-c552-grade-6' }], finishId: 'aluminium-oxidised' }
+          ? { layers: [{ materialId: 'cellular-glass-c552-grade-6' }], finishId: 'mastic-or-canvas' }
           : d > 3
             ? { layers: [{ materialId: 'mineral-fibre-board-c612-type-iva' }], finishId: 'galvanised-steel-weathered' }
             : null;

@@ -1,4 +1,5 @@
-import { annualCo2, energyCost, fuelEnergyKWh } from '../../shared/calc/energy';
+import Decimal from 'decimal.js';
+import { annualCo2, chillerElectricityKWh, energyCost, fuelEnergyKWh } from '../../shared/calc/energy';
 import type { SizedItem } from '../../shared/calc/sizing/batch';
 import type { SizingContext, SizingTask } from '../../shared/calc/sizing/types';
 import type { SizingSettingsInput } from '../../shared/schemas/lines';
@@ -149,16 +150,28 @@ type EnergyBasisFields = {
   heatSourceEfficiency?: number;
   co2KgPerKWh?: number;
   co2Basis?: string;
+  coolingCop?: number;
+  electricityPricePerKWh?: number;
+  electricityCo2KgPerKWh?: number;
+  electricityCo2Basis?: string;
 };
 
-/** Purchased energy, cost and CO₂ of a year's heat at the site's energy basis. */
-function costOf(heatKWh: number, basis: EnergyBasisFields) {
-  if (basis.energyPricePerKWh === undefined) return null;
-  const purchasedKWh = fuelEnergyKWh(heatKWh, basis.heatSourceEfficiency ?? 1);
+type YearCost = { cost: Decimal; co2Tonnes: number };
+
+/**
+ * Cost and CO₂ of a year's heat at the site's energy basis: a loss is made up by the heat source (fuel at its
+ * efficiency), a gain on cold service is removed by a chiller (electricity at its COP) when the basis gives the
+ * chiller's figures, else it is charged like a loss.
+ */
+function yearCost(heatKWh: number, service: 'hot' | 'cold' | null, basis: EnergyBasisFields): YearCost {
+  const chiller = service === 'cold' && basis.coolingCop !== undefined && basis.electricityPricePerKWh !== undefined;
+  const price = chiller ? basis.electricityPricePerKWh : basis.energyPricePerKWh;
+  const factor = chiller ? basis.electricityCo2KgPerKWh : basis.co2KgPerKWh;
+  if (price === undefined) return { cost: new Decimal(0), co2Tonnes: 0 };
+  const purchasedKWh = chiller ? chillerElectricityKWh(heatKWh, basis.coolingCop as number) : fuelEnergyKWh(heatKWh, basis.heatSourceEfficiency ?? 1);
   return {
-    cost: energyCost(purchasedKWh, { amount: String(basis.energyPricePerKWh), per: 'kWh' }).text,
-    co2Tonnes: basis.co2KgPerKWh === undefined ? null : annualCo2(purchasedKWh, { kgCo2PerKWh: basis.co2KgPerKWh, basis: basis.co2Basis || 'as set in the site\'s energy basis' }).tonnes,
-    purchasedKWh,
+    cost: energyCost(purchasedKWh, { amount: String(price), per: 'kWh' }).amount,
+    co2Tonnes: factor === undefined ? 0 : annualCo2(purchasedKWh, { kgCo2PerKWh: factor, basis: "the site's energy basis" }).tonnes,
   };
 }
 
@@ -170,8 +183,16 @@ export async function siteOverview(deps: { db: Db }, caller: Caller, siteId: num
   const sum = (k: 'heatLossW' | 'bareHeatLossW' | 'annualEnergyKWh' | 'bareAnnualEnergyKWh') => byService.reduce((s, r) => s + r[k], 0);
   const annual = sum('annualEnergyKWh');
   const bareAnnual = sum('bareAnnualEnergyKWh');
-  const cost = costOf(annual, energy);
-  const bareCost = costOf(bareAnnual, energy);
+  const add = (k: 'annualEnergyKWh' | 'bareAnnualEnergyKWh') => {
+    if (energy.energyPricePerKWh === undefined) return null;
+    const parts = byService.map((r) => yearCost(r[k], r.serviceKind, energy));
+    return {
+      cost: parts.reduce((sum, c) => sum.plus(c.cost), new Decimal(0)).toFixed(2),
+      co2Tonnes: energy.co2KgPerKWh === undefined ? null : parts.reduce((sum, c) => sum + c.co2Tonnes, 0),
+    };
+  };
+  const cost = add('annualEnergyKWh');
+  const bareCost = add('bareAnnualEnergyKWh');
   const services = new Map<string, { service: string; heatLossW: number; annualEnergyKWh: number; items: number }>();
   for (const r of byService) {
     const name = r.service || '(no service)';
@@ -201,6 +222,9 @@ export async function siteOverview(deps: { db: Db }, caller: Caller, siteId: num
       heatSourceEfficiency: energy.heatSourceEfficiency ?? null,
       co2KgPerKWh: energy.co2KgPerKWh ?? null,
       co2Basis: energy.co2Basis ?? null,
+      coolingCop: energy.coolingCop ?? null,
+      electricityPricePerKWh: energy.electricityPricePerKWh ?? null,
+      electricityCo2KgPerKWh: energy.electricityCo2KgPerKWh ?? null,
     },
     byService: [...services.values()].sort((a, b) => Math.abs(b.heatLossW) - Math.abs(a.heatLossW)),
   };

@@ -36,6 +36,7 @@ export const BASIS_RANGES = {
     windSpeedMS: { label: 'wind speed', unit: 'm/s', min: 0, max: 30, why: 'beyond storm force', usualMax: 1, usualNote: 'touch safety is usually judged in still air, the worst case: wind cools the surface' },
     surfaceEmissivity: { label: 'surface emissivity', unit: 'ratio', min: 0.02, max: 1, why: 'the physical range of real surfaces' },
     contactSeconds: { label: 'contact time', unit: 's', min: 1, max: 28800, why: 'the contact periods of ISO 13732-1 (1 s to 8 h)', usualMax: 600, usualNote: 'contact this long is unusual; 5 s is the industrial basis of ASTM C1055' },
+    maxSurfaceC: { label: 'touch limit', unit: '°C', min: 30, max: 100, why: 'the highest surface temperature a site may set for people to touch', usualMin: 40, usualMax: 65, usualNote: 'a touch limit outside 40…65 °C is unusual; the burn threshold for the surface and contact time applies when it is lower' },
   },
   energy: {
     airTemperatureC: { label: 'air temperature', unit: '°C', min: -50, max: 45, why: 'an annual average anywhere people run plants', usualMin: -20, usualMax: 30, usualNote: 'an annual-average air temperature outside −20…30 °C is unusual' },
@@ -105,6 +106,7 @@ export const touchBasisSchema = yup
     windSpeedMS: rangeNumber('touch', R.touch.windSpeedMS).optional(),
     surfaceEmissivity: rangeNumber('touch', R.touch.surfaceEmissivity).optional(),
     contactSeconds: rangeNumber('touch', R.touch.contactSeconds).optional(),
+    maxSurfaceC: rangeNumber('touch', R.touch.maxSurfaceC).optional(),
   })
   .noUnknown()
   .strict();

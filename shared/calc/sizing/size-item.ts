@@ -21,7 +21,7 @@
  * - A bare item (for the saving against bare) has an oxidised carbon-steel surface.
  */
 
-import { burnThresholdWithSource } from '../burn';
+import { COLD_CONTACT_WARNING_C, touchSafetyVerdict } from '../burn';
 import { DEFAULT_MAX_THICKNESS_M } from '../analyse';
 import { lineHeatFlowW } from '../energy';
 import { pipeInnerDiameterM, pipeMassPerMetreKg, pipeSizeByNps } from '../pipe-sizes';
@@ -50,9 +50,6 @@ export const SIZING_RULES_VERSION = 1;
 
 /** Surface of a bare item for the saving against bare: oxidised carbon steel, ε = 0.8 (typical, built-in finish). */
 export const BARE_SURFACE_EMISSIVITY = 0.8;
-
-/** Colder than this a metal surface can freeze skin on contact (cold-contact practice, ISO 13732-3). */
-export const COLD_CONTACT_WARNING_C = -10;
 
 /** Default margin above the dew point when the condensation basis gives none [K] (common practice). */
 const DEFAULT_MARGIN_K = 1;
@@ -92,7 +89,7 @@ export type SizingPlan = {
   evaluations: PlannedEvaluation[];
   /** Ambient of the bare item at the energy basis. */
   bareAmbient?: Ambient;
-  burnLimit?: { limitC: number; source: string };
+  burnLimit?: { limitC: number; maxPassingC: number; source: string };
   line?: { lengthM: number; valves: number; flanges: number; fittings: number; insulated: boolean };
   operatingHoursPerYear: number | null;
   warnings: Warning[];
@@ -218,11 +215,16 @@ export function planItemSizing(task: SizingTask, ctx: SizingContext): SizingPlan
   let burnLimit: SizingPlan['burnLimit'];
   const touch = bases.touch;
   if (touch && service === 'hot') {
-    const threshold = burnThresholdWithSource(finish.contactMaterial, touch.contactSeconds);
-    burnLimit =
-      touch.maxSurfaceC !== undefined && touch.maxSurfaceC < threshold.thresholdC
-        ? { limitC: touch.maxSurfaceC, source: "The site's touch limit (below the burn threshold for this surface)" }
-        : { limitC: threshold.thresholdC, source: threshold.source };
+    // The one governing limit of touch safety, the same rule quick sizing and the register use; sizing aims
+    // for the highest surface that still passes as shown.
+    const v = touchSafetyVerdict({
+      surfaceTemperatureC: touch.airTemperatureC,
+      airTemperatureC: touch.airTemperatureC,
+      limitC: touch.maxSurfaceC,
+      limitSource: "the site's touch limit",
+      contact: { material: finish.contactMaterial, seconds: touch.contactSeconds },
+    });
+    burnLimit = { limitC: v.limitC, maxPassingC: v.maxPassingSurfaceC ?? v.limitC, source: v.source };
   }
   const touchAmbient = touch ? ambientOf(item, touch.airTemperatureC, touch.windSpeedMS ?? 0, touch.radiantTemperatureC) : undefined;
   const touchEmissivity = touch?.surfaceEmissivity ?? finish.emissivityRange[0];
@@ -252,12 +254,12 @@ export function planItemSizing(task: SizingTask, ctx: SizingContext): SizingPlan
             outcome: { status: 'notApplicable', message: 'Cold service: hot-surface burn thresholds do not apply (see the cold-contact caution).' },
           });
         } else {
-          const limit = burnLimit as { limitC: number };
-          const target = `surface at most ${fmt(limit.limitC)} °C`;
-          if (item.operatingTemperatureC <= limit.limitC) {
+          const limit = burnLimit as NonNullable<SizingPlan['burnLimit']>;
+          const target = `surface at most ${fmt(limit.maxPassingC)} °C`;
+          if (item.operatingTemperatureC <= limit.maxPassingC) {
             purposes.push({ purpose, basis: 'touch', target, outcome: { status: fixed ? 'met' : 'sized', thicknessM: 0, totalThicknessM: 0, message: 'The operating temperature is within the touch limit.' } });
           } else {
-            purposes.push({ purpose, basis: 'touch', target, ...withCriterion(base(touchAmbient, touchEmissivity), { criterion: 'surfaceTemperature', maxC: limit.limitC }) });
+            purposes.push({ purpose, basis: 'touch', target, ...withCriterion(base(touchAmbient, touchEmissivity), { criterion: 'surfaceTemperature', maxC: limit.maxPassingC }) });
           }
         }
         break;
@@ -367,10 +369,11 @@ export function planItemSizing(task: SizingTask, ctx: SizingContext): SizingPlan
   if (energyAmbient) evaluations.push({ basis: 'energy', ambient: energyAmbient, emissivity: finish.emissivity });
   if (service === 'hot' && touchAmbient) evaluations.push({ basis: 'touch', ambient: touchAmbient, emissivity: touchEmissivity });
   if (service === 'cold' && condAmbient) evaluations.push({ basis: 'condensation', ambient: condAmbient, emissivity: finish.emissivityRange[0] });
-  if (item.operatingTemperatureC < COLD_CONTACT_WARNING_C) {
+  const coldContactC = COLD_CONTACT_WARNING_C[finish.contactMaterial];
+  if (item.operatingTemperatureC < coldContactC) {
     warnings.push({
       code: 'COLD_CONTACT',
-      message: `The service runs at ${fmt(item.operatingTemperatureC)} °C: a bare or damaged metal surface below about ${COLD_CONTACT_WARNING_C} °C can freeze skin on contact (cold-contact practice, ISO 13732-3).`,
+      message: `The service runs at ${fmt(item.operatingTemperatureC)} °C: a bare or damaged surface below about ${fmt(coldContactC)} °C can freeze skin on contact (cold-contact practice, ISO 13732-3).`,
     });
   }
 
@@ -569,11 +572,18 @@ export function sizeItem(task: SizingTask, ctx: SizingContext): ItemSizing {
     warnings: dedupe(warnings),
   };
   const touchEval = at('touch');
-  if (plan.burnLimit && touchEval) {
-    // Compared at the precision results are shown (0.1 °C): a surface shown at the limit meets it.
-    const shown = Math.round(touchEval.surfaceTemperatureC * 10) / 10;
-    out.burnVerdict = shown <= plan.burnLimit.limitC ? 'pass' : 'fail';
-    out.burn = { ...plan.burnLimit };
+  const touchBasis = ctx.bases.touch;
+  if (plan.burnLimit && touchEval && touchBasis) {
+    const finish = ctx.library.finishes.find((f) => f.id === plan.finishId) as SizingFinish;
+    const v = touchSafetyVerdict({
+      surfaceTemperatureC: touchEval.surfaceTemperatureC,
+      airTemperatureC: touchBasis.airTemperatureC,
+      limitC: touchBasis.maxSurfaceC,
+      limitSource: "the site's touch limit",
+      contact: { material: finish.contactMaterial, seconds: touchBasis.contactSeconds },
+    });
+    out.burnVerdict = v.verdict === 'fail' ? 'fail' : 'pass';
+    out.burn = { limitC: v.limitC, source: v.source };
   }
   if (energyEval) {
     const bareFlow = bare();

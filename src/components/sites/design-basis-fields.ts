@@ -47,6 +47,7 @@ export const BASES: readonly BasisSpec[] = [
       WIND_SPEED,
       { key: 'surfaceEmissivity', label: 'Surface emissivity', quantity: 'ratio' },
       { key: 'contactSeconds', label: 'Contact time', quantity: 'seconds' },
+      { key: 'maxSurfaceC', label: 'Touch limit (highest surface temperature)', quantity: 'temperature' },
     ],
   },
   {

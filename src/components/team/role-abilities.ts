@@ -12,6 +12,7 @@ const PERMISSION_WORDS: Record<Permission, string> = {
   'site.delete': 'delete sites',
   'site.members': 'add contractors to sites and take them off',
   'lines.edit': 'edit line lists and size insulation',
+  'library.edit': "add and edit the team's own materials and finishes",
   'revisions.issue': 'issue revisions',
   'schedule.import': 'import schedules from CSV',
   'surfaces.create': 'record surfaces in the hot-surface register',
