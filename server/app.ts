@@ -23,19 +23,29 @@ import { registerSizingRoutes } from './sizing/sizing.routes';
 import { createLogger, type Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 import { registerMeRoutes } from './me/me.routes';
+import { registerRegisterRoutes } from './register/register.routes';
+import { createReminderScheduler, type ReminderScheduler } from './register/reminders';
 import { registerSiteRoutes } from './sites/sites.routes';
 import { registerTeamRoutes } from './team/team.routes';
 
-export type AppOptions = { db: Db; mailer: Mailer; config: Config; logger?: Logger; calc?: CalcPool };
+export type AppOptions = {
+  db: Db;
+  mailer: Mailer;
+  config: Config;
+  logger?: Logger;
+  calc?: CalcPool;
+  /** The clock [ms since epoch]; tests pass their own. */
+  now?: () => number;
+};
 
 export type LaglineApp = Express & {
-  locals: { apiRouter: Router; calc: CalcPool; jobs: JobRunner };
+  locals: { apiRouter: Router; calc: CalcPool; jobs: JobRunner; reminders: ReminderScheduler };
 };
 
 const CALCULATIONS = '/v1/calculations';
 
 /** Builds the whole HTTP application. Never listens (server/index.ts and tests do). */
-export function createApp({ db, mailer, config, logger = createLogger(config.logLevel), calc }: AppOptions): LaglineApp {
+export function createApp({ db, mailer, config, logger = createLogger(config.logLevel), calc, now = Date.now }: AppOptions): LaglineApp {
   const app = express() as LaglineApp;
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -43,7 +53,9 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
 
   const pool = calc ?? createCalcPool(config);
   const jobs = createJobRunner({ db, logger, handlers: { [SITE_SIZING]: siteSizingHandler({ db, calc: pool }) } });
-  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: pool, jobs };
+  const deps: Deps = { db, mailer, config, logger, limiters: createLimiters(config), calc: pool, jobs, now };
+  // Register reminders: started by server/index.ts (tests drive tick() themselves).
+  const reminders = createReminderScheduler({ db, mailer, config, logger, now });
 
   app.use(requestId);
   app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls: config.appUrl.startsWith('https:') }));
@@ -73,6 +85,7 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   registerLibraryRoutes(api, deps);
   registerLineRoutes(api, deps);
   registerSizingRoutes(api, deps);
+  registerRegisterRoutes(api, deps, reminders.poke);
   registerDevMailRoutes(api, deps);
   registerCalculationRoutes(api, deps);
   app.use(api);
@@ -80,6 +93,7 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.locals.apiRouter = api;
   app.locals.calc = deps.calc;
   app.locals.jobs = jobs;
+  app.locals.reminders = reminders;
 
   mountWebApp(app, config.distDir);
   app.use(errorHandler(logger));

@@ -6,5 +6,5 @@ import type { Limiters } from './http/rate-limits';
 import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 
-/** What route modules receive from createApp. */
-export type Deps = { db: Db; mailer: Mailer; config: Config; logger: Logger; limiters: Limiters; calc: CalcPool; jobs: JobRunner };
+/** What route modules receive from createApp. `now` is the clock (ms since epoch), injectable for tests. */
+export type Deps = { db: Db; mailer: Mailer; config: Config; logger: Logger; limiters: Limiters; calc: CalcPool; jobs: JobRunner; now: () => number };

@@ -39,6 +39,8 @@ async function main(): Promise<void> {
   const app = createApp({ db, mailer, config, logger });
   // Jobs interrupted by a stop (or left by another process that stopped) continue here.
   app.locals.jobs.start();
+  // Register reminders (assignment, due soon, overdue, requests to verify); their state is in MariaDB.
+  app.locals.reminders.start();
 
   const server = app.listen(config.port, config.host, () => {
     const { port } = server.address() as AddressInfo;
@@ -65,6 +67,7 @@ async function main(): Promise<void> {
     (setTimeout(() => process.exit(1), 10_000) as unknown as NodeJS.Timeout).unref();
     server.close(async () => {
       await app.locals.jobs.stop().catch(() => undefined);
+      await app.locals.reminders.stop().catch(() => undefined);
       await app.locals.calc.close().catch(() => undefined);
       await catcher?.close().catch(() => undefined);
       mailer.close();

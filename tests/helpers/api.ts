@@ -16,22 +16,24 @@ export type ApiContext = {
   app: LaglineApp;
   mail: TestMail;
   mailer: Mailer;
-  /** A new app on the same database and secret (a server restart). */
-  restart: (overrides?: Partial<Config>) => LaglineApp;
+  /** A new app on the same database and secret (a server restart, or a second process); `now` is its clock. */
+  restart: (overrides?: Partial<Config>, app?: { now?: () => number }) => LaglineApp;
   /** A cookie-keeping client that has fetched its CSRF token. */
   agent: (app?: LaglineApp) => Promise<Agent>;
   close: () => Promise<void>;
 };
 
 /** supertest against createApp on a fresh database, with a mail catcher. */
-export async function createApiContext(opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined> } = {}): Promise<ApiContext> {
+export async function createApiContext(
+  opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined>; now?: () => number } = {},
+): Promise<ApiContext> {
   const database = await createTestDatabase({ seed: opts.seed });
   const mail = await startTestMail(database.db);
   const config = testConfig(opts.config, opts.env);
   const mailer = createMailer({ mailFrom: config.mailFrom, smtp: { host: '127.0.0.1', port: mail.port } });
   const apps: LaglineApp[] = [];
-  const make = (overrides: Partial<Config> = {}) => {
-    const a = createApp({ db: database.db, mailer, config: Object.freeze({ ...config, ...overrides }) });
+  const make = (overrides: Partial<Config> = {}, appOpts: { now?: () => number } = {}) => {
+    const a = createApp({ db: database.db, mailer, config: Object.freeze({ ...config, ...overrides }), now: appOpts.now ?? opts.now });
     apps.push(a);
     return a;
   };
@@ -52,6 +54,7 @@ export async function createApiContext(opts: { seed?: boolean; config?: Partial<
     close: async () => {
       for (const a of apps) {
         await a.locals.jobs.stop();
+        await a.locals.reminders.stop();
         await a.locals.calc.close();
       }
       mailer.close();

@@ -45,6 +45,7 @@ export async function startTestServer(opts: { seed?: boolean; config?: Partial<C
       server.closeAllConnections?.();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await app.locals.jobs.stop();
+      await app.locals.reminders.stop();
       await app.locals.calc.close();
       mailer.close();
       await mail.close();
