@@ -32,7 +32,8 @@ import { findMember } from '../team/teams.repository';
 import { processPhoto, removePhotoFiles, writePhotoFiles, type ProcessedPhoto } from './photos';
 import * as repo from './register.repository';
 import type { EntryRecord, EntryWrite, HistoryChange, LinkedItem } from './register.repository';
-import { STATUS_WORDS, dayOf } from './register-words';
+import { STATUS_WORDS, addDays, dayOf } from './register-words';
+import { DUE_SOON_DAYS } from './reminders';
 import { queueReminders } from './reminders.repository';
 
 export type RegisterDeps = { db: Db; config: Pick<Config, 'uploadDir'>; now: () => number; poke?: () => void };
@@ -712,7 +713,12 @@ export async function transition(deps: RegisterDeps, caller: Caller, id: number,
       at,
     });
     if (name === 'assign') {
-      await queueReminders(trx, [{ teamId: caller.teamId, entryId: id, kind: 'assigned', key: `h${historyId}`, recipientUserId: w.ownerUserId as number }], at);
+      const rows: Parameters<typeof queueReminders>[1] = [{ teamId: caller.teamId, entryId: id, kind: 'assigned', key: `h${historyId}`, recipientUserId: w.ownerUserId as number }];
+      // The assignment mail already says when it is due: no separate due-soon mail when it is due that soon.
+      if ((w.dueDate as string) <= addDays(dayOf(now), DUE_SOON_DAYS)) {
+        rows.push({ teamId: caller.teamId, entryId: id, kind: 'dueSoon', key: w.dueDate as string, recipientUserId: w.ownerUserId as number, status: 'skipped' });
+      }
+      await queueReminders(trx, rows, at);
       queued = true;
     }
     if (name === 'madeSafe') {

@@ -14,7 +14,7 @@ import type { ReminderKind } from './register-mail';
 
 export async function queueReminders(
   db: Db,
-  rows: { teamId: number; entryId: number; kind: ReminderKind; key: string; recipientUserId: number }[],
+  rows: { teamId: number; entryId: number; kind: ReminderKind; key: string; recipientUserId: number; status?: 'pending' | 'skipped' }[],
   now: Date,
 ): Promise<void> {
   if (rows.length === 0) return;
@@ -26,7 +26,7 @@ export async function queueReminders(
         kind: r.kind,
         reminder_key: r.key,
         recipient_user_id: r.recipientUserId,
-        status: 'pending',
+        status: r.status ?? 'pending',
         not_before: now,
         created_at: now,
       })),
