@@ -4,7 +4,7 @@
  * database, and across a restart.
  */
 import { createApp } from '../../server/app';
-import type { Mailer, OutgoingMail } from '../../server/mail/mailer';
+import type { Mailer } from '../../server/mail/mailer';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner } from '../helpers/api';
 
 jest.setTimeout(120_000);
