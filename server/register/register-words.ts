@@ -1,37 +1,7 @@
-import type { MeasurementMethod, RegisterVerdictValue } from '../../shared/calc/register';
-import type { ContactMaterial } from '../../shared/calc/types';
 import { KELVIN_PER_FAHRENHEIT_DEGREE } from '../../shared/calc/units';
 import type { UnitSystem } from '../../shared/schemas/common';
-import type { RegisterStatus } from '../../shared/schemas/register';
 
-/** Words the register's mail and exports use (the app has its own in src/components/register). */
-export const STATUS_WORDS: Record<RegisterStatus, string> = {
-  open: 'Open',
-  actionAssigned: 'Action assigned',
-  madeSafe: 'Made safe',
-  verified: 'Verified',
-  accepted: 'Accepted',
-};
-
-export const METHOD_WORDS: Record<MeasurementMethod, string> = {
-  contact: 'Contact probe',
-  infrared: 'Infrared',
-  calculated: 'Calculated',
-};
-
-export const MATERIAL_WORDS: Record<ContactMaterial, string> = {
-  uncoatedMetal: 'Uncoated metal',
-  coatedMetal: 'Coated metal',
-  ceramicGlassStone: 'Ceramic, glass, stone',
-  plastic: 'Plastic',
-  wood: 'Wood',
-};
-
-export const VERDICT_WORDS: Record<RegisterVerdictValue, string> = {
-  fail: 'Fail: above the limit',
-  caution: 'Caution',
-  pass: 'Pass: at or below the limit',
-};
+export { MATERIAL_WORDS, METHOD_WORDS, STATUS_WORDS, VERDICT_WORDS } from '../../shared/schemas/register';
 
 /** A temperature in the reader's units, to the tenth (results) or whole degrees (lists). */
 export function temperatureText(celsius: number | null | undefined, system: UnitSystem, decimals = 1): string {

@@ -93,7 +93,8 @@ export function registerRegisterRoutes(router: Router, deps: Deps, poke: () => v
       res.setHeader('Cache-Control', 'private, max-age=86400');
       res.setHeader('Content-Disposition', `inline; filename="register-photo-${req.params.id}${which === 'thumbnail' ? '-thumbnail' : ''}.jpg"`);
       res.type(f.contentType);
-      res.sendFile(photoPath(deps.config.uploadDir, f.name), { dotfiles: 'deny' }, (err) => {
+      // The upload folder may sit under a dot-folder (.uploads/); the file name itself is one we generated.
+      res.sendFile(photoPath(deps.config.uploadDir, f.name), { dotfiles: 'allow' }, (err) => {
         if (err && !res.headersSent) next((err as { code?: string }).code === 'ENOENT' ? register.photoMissing() : err);
       });
     });

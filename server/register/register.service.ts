@@ -638,6 +638,7 @@ export async function transition(deps: RegisterDeps, caller: Caller, id: number,
     }
     const w: Partial<EntryWrite> = {};
     let note = '';
+    let ownerName: string | null = null;
     const closeFields = async () => {
       w.closedBy = caller.userId;
       w.closedAt = at;
@@ -647,7 +648,7 @@ export async function transition(deps: RegisterDeps, caller: Caller, id: number,
     switch (name) {
       case 'assign': {
         const a = input as AssignInput;
-        await assigneeOrRefuse(trx, caller, e.siteId, a.ownerUserId);
+        ownerName = (await assigneeOrRefuse(trx, caller, e.siteId, a.ownerUserId)).name;
         if (a.dueDate < dayOf(now)) throw bad('dueDate', 'The due date is in the past.');
         Object.assign(w, { status: spec.to, ownerUserId: a.ownerUserId, dueDate: a.dueDate, action: a.action, assignedBy: caller.userId, statusNote: '' });
         note = a.action;
@@ -700,6 +701,8 @@ export async function transition(deps: RegisterDeps, caller: Caller, id: number,
       const before = current[k] ?? null;
       if (JSON.stringify(before) !== JSON.stringify(v)) changes[k] = { from: before, to: v };
     }
+    // Names as they were, so the history reads the same after someone leaves the team.
+    if (changes.ownerUserId) changes.owner = { from: e.ownerName, to: ownerName };
     await repo.updateEntry(trx, caller.teamId, id, caller.userId, w);
     const historyId = await repo.insertHistory(trx, {
       entryId: id,

@@ -2,7 +2,7 @@ import * as yup from 'yup';
 
 import { CONTACT_MATERIALS } from '../calc/burn';
 import { FINISHES } from '../calc/library/finishes';
-import { MEASUREMENT_METHODS, type MeasurementMethod } from '../calc/register';
+import { MEASUREMENT_METHODS, type MeasurementMethod, type RegisterVerdictValue } from '../calc/register';
 import type { ContactMaterial } from '../calc/types';
 
 import type { Permission } from './permissions';
@@ -225,3 +225,32 @@ export const TRANSITION_SCHEMAS = {
 
 /** Verdict filter values of the register list. */
 export const REGISTER_VERDICTS = ['fail', 'caution', 'pass'] as const;
+
+/** Words for statuses, methods, materials and verdicts, shared by the app, the mail and the exports. */
+export const STATUS_WORDS: Record<RegisterStatus, string> = {
+  open: 'Open',
+  actionAssigned: 'Action assigned',
+  madeSafe: 'Made safe',
+  verified: 'Verified',
+  accepted: 'Accepted',
+};
+
+export const METHOD_WORDS: Record<MeasurementMethod, string> = {
+  contact: 'Contact probe',
+  infrared: 'Infrared',
+  calculated: 'Calculated',
+};
+
+export const MATERIAL_WORDS: Record<ContactMaterial, string> = {
+  uncoatedMetal: 'Uncoated metal',
+  coatedMetal: 'Coated metal',
+  ceramicGlassStone: 'Ceramic, glass, stone',
+  plastic: 'Plastic',
+  wood: 'Wood',
+};
+
+export const VERDICT_WORDS: Record<RegisterVerdictValue, string> = {
+  fail: 'Fail: above the limit',
+  caution: 'Caution',
+  pass: 'Pass: at or below the limit',
+};

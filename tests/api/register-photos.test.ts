@@ -61,7 +61,8 @@ const counts = async () => ({
 });
 
 beforeAll(async () => {
-  uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), 'lagline-photos-'));
+  // Under a dot-folder, as the default .uploads/ is.
+  uploadDir = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'lagline-photos-')), '.uploads');
   ctx = await createApiContext({ config: { uploadDir } });
   const o = await signUpOwner(ctx, { teamName: 'Photo team' });
   owner = o.agent;
@@ -75,7 +76,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await ctx.close();
-  fs.rmSync(uploadDir, { recursive: true, force: true });
+  fs.rmSync(path.dirname(uploadDir), { recursive: true, force: true });
 });
 
 describe('a field entry with a photo', () => {
