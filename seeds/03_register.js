@@ -48,6 +48,7 @@ async function drawnPhoto(caption, tint) {
 
 /** @param {import('knex').Knex} knex */
 exports.seed = async function seed(knex) {
+  // Demo photos are named after their content (one file per drawing); earlier uploads of this database go.
   const old = await knex('register_photos').select('file_name', 'thumbnail_name').catch(() => []);
   await knex.raw('SET FOREIGN_KEY_CHECKS = 0');
   try {
@@ -272,7 +273,7 @@ exports.seed = async function seed(knex) {
     }
     if (e.photo) {
       const processed = await photos.processPhoto(await drawnPhoto(e.photo[0], e.photo[1]), { name: 'demo.jpg', field: 'photos[0]', keepLocation: false });
-      const stored = await photos.writePhotoFiles(uploadDir, processed);
+      const stored = await photos.writePhotoFiles(uploadDir, processed, { byContent: true });
       await knex('register_photos').insert({
         entry_id: id,
         team_id: team.id,

@@ -149,15 +149,19 @@ export function photoPath(uploadDir: string, name: string): string {
   return path.join(uploadDir, FOLDER, name);
 }
 
-/** Writes a processed photo under new generated names; returns them. */
-export async function writePhotoFiles(uploadDir: string, p: ProcessedPhoto): Promise<{ fileName: string; thumbnailName: string }> {
-  const base = crypto.randomBytes(16).toString('hex');
+/**
+ * Writes a processed photo under new generated names; returns them. `byContent` names the files after their
+ * content instead (the demo seed: the same drawn photo is one file however often it is seeded).
+ */
+export async function writePhotoFiles(uploadDir: string, p: ProcessedPhoto, opts: { byContent?: boolean } = {}): Promise<{ fileName: string; thumbnailName: string }> {
+  const base = opts.byContent ? crypto.createHash('sha256').update(p.image).digest('hex').slice(0, 32) : crypto.randomBytes(16).toString('hex');
   const fileName = `${base}.jpg`;
   const thumbnailName = `${base}-thumb.jpg`;
+  const flag = opts.byContent ? 'w' : 'wx';
   await fs.mkdir(path.join(uploadDir, FOLDER), { recursive: true, mode: 0o750 });
-  await fs.writeFile(photoPath(uploadDir, fileName), p.image, { flag: 'wx', mode: 0o640 });
+  await fs.writeFile(photoPath(uploadDir, fileName), p.image, { flag, mode: 0o640 });
   try {
-    await fs.writeFile(photoPath(uploadDir, thumbnailName), p.thumbnail, { flag: 'wx', mode: 0o640 });
+    await fs.writeFile(photoPath(uploadDir, thumbnailName), p.thumbnail, { flag, mode: 0o640 });
   } catch (e) {
     await fs.rm(photoPath(uploadDir, fileName), { force: true });
     throw e;

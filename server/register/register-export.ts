@@ -2,7 +2,8 @@ import PDFDocument from 'pdfkit';
 import type { UnitSystem } from '../../shared/schemas/common';
 import { FINISHES } from '../../shared/calc/library/finishes';
 import { toCsv, type CsvValue } from '../http/csv';
-import type { RegisterQuery, RegisterRow } from './register.service';
+import type { RegisterRow } from '../../shared/schemas/register';
+import type { RegisterQuery } from './register.service';
 import { dateText, MATERIAL_WORDS, METHOD_WORDS, STATUS_WORDS, temperatureText, VERDICT_WORDS } from './register-words';
 
 const finishName = (id: string | null) => (id ? (FINISHES.find((f) => f.id === id)?.name ?? id) : '');

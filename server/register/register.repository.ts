@@ -50,31 +50,11 @@ export type EntryRecord = {
   photoCount: number;
 };
 
-/** The stored fields an insert or update writes (SI). */
-export type EntryWrite = {
-  siteId: number;
-  itemId: number | null;
-  itemInputHash: string | null;
-  location: string;
-  description: string;
-  measuredTemperatureC: number;
-  method: MeasurementMethod;
-  emissivitySetting: number | null;
-  surfaceMaterial: ContactMaterial;
-  surfaceFinishId: string | null;
-  withinReach: boolean;
-  contactSeconds: number | null;
-  measuredAt: Date;
-  status: RegisterStatus;
-  action: string;
-  ownerUserId: number | null;
-  dueDate: string | null;
-  assignedBy: number | null;
-  statusNote: string;
-  closedBy: number | null;
-  closedAt: Date | null;
-  verificationTemperatureC: number | null;
-};
+/** The stored fields an insert or update writes (SI); times as Dates. */
+export type EntryWrite = Omit<
+  EntryRecord,
+  'id' | 'teamId' | 'siteName' | 'itemKind' | 'itemTag' | 'ownerName' | 'closedByName' | 'version' | 'createdBy' | 'createdByName' | 'createdAt' | 'updatedAt' | 'photoCount' | 'measuredAt' | 'closedAt'
+> & { measuredAt: Date; closedAt: Date | null };
 
 const COLUMNS: Record<keyof EntryWrite, string> = {
   siteId: 'site_id',

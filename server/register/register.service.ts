@@ -1,4 +1,4 @@
-import { registerVerdict, type RegisterTouchBasis, type RegisterVerdict, type RegisterVerdictValue } from '../../shared/calc/register';
+import { registerVerdict, type RegisterTouchBasis, type RegisterVerdictValue } from '../../shared/calc/register';
 import { sizingLibrary } from '../../shared/calc/sizing/library';
 import type { ContactMaterial } from '../../shared/calc/types';
 import { can } from '../../shared/schemas/permissions';
@@ -18,6 +18,7 @@ import {
   type RegisterStatus,
   type RegisterTransition,
   type VerifyInput,
+  type RegisterRow,
 } from '../../shared/schemas/register';
 import type { DesignBases } from '../../shared/schemas/sites';
 import { insertAudit } from '../audit/audit.repository';
@@ -70,46 +71,6 @@ function readingOf(e: EntryRecord) {
     contactSeconds: e.contactSeconds,
   };
 }
-
-/** One row of the register: a measured (or recorded) entry, or an item's calculated risk. */
-export type RegisterRow = {
-  source: 'measured' | 'calculated';
-  /** Stable across both kinds: `entry-<id>` or `item-<id>`. */
-  key: string;
-  /** The entry's id; null for a calculated risk (see `item`). */
-  id: number | null;
-  siteId: number;
-  siteName: string;
-  item: { id: number; kind: 'line' | 'vessel'; tag: string } | null;
-  location: string;
-  description: string;
-  measuredTemperatureC: number | null;
-  method: EntryRecord['method'];
-  emissivitySetting: number | null;
-  surfaceMaterial: ContactMaterial | null;
-  surfaceFinishId: string | null;
-  withinReach: boolean;
-  contactSeconds: number | null;
-  measuredAt: string | null;
-  /** null for a calculated risk. */
-  status: RegisterStatus | null;
-  action: string;
-  owner: { userId: number; name: string } | null;
-  dueDate: string | null;
-  overdue: boolean;
-  statusNote: string;
-  closedBy: { userId: number; name: string } | null;
-  closedAt: string | null;
-  verificationTemperatureC: number | null;
-  verdict: RegisterVerdict;
-  photoCount: number;
-  version: number | null;
-  createdBy: { userId: number; name: string } | null;
-  createdAt: string | null;
-  updatedAt: string | null;
-  /** When a calculated risk's item was sized. */
-  sizedAt: string | null;
-};
 
 export function entryView(e: EntryRecord, basis: RegisterTouchBasis, today: string): RegisterRow {
   return {
@@ -227,11 +188,13 @@ export function parseRegisterQuery(query: Record<string, unknown>, opts: { paged
     if (!QUERY_KEYS.has(k) || (!opts.paged && (k === 'limit' || k === 'cursor'))) throw bad(k, `Unknown query parameter "${k}".`);
   }
   const out: RegisterQuery = { limit: 100 };
-  const siteId = one(query, 'siteId');
-  if (siteId !== undefined) {
-    if (!/^[1-9]\d{0,9}$/.test(siteId)) throw bad('siteId', 'siteId must be a site id.');
-    out.siteId = Number(siteId);
-  }
+  const id = (key: string, what: string) => {
+    const v = one(query, key);
+    if (v !== undefined && !/^[1-9]\d{0,9}$/.test(v)) throw bad(key, `${key} must be ${what}.`);
+    return v === undefined ? undefined : Number(v);
+  };
+  out.siteId = id('siteId', 'a site id');
+  out.ownerUserId = id('ownerId', 'a user id');
   const status = one(query, 'status');
   if (status !== undefined) {
     const parts = status.split(',').filter(Boolean);
@@ -243,11 +206,6 @@ export function parseRegisterQuery(query: Record<string, unknown>, opts: { paged
       else throw bad('status', `status must be one or more of ${REGISTER_STATUSES.join(', ')}, active or closed (comma-separated).`);
     }
     if (statuses.size) out.statuses = [...statuses];
-  }
-  const ownerId = one(query, 'ownerId');
-  if (ownerId !== undefined) {
-    if (!/^[1-9]\d{0,9}$/.test(ownerId)) throw bad('ownerId', 'ownerId must be a user id.');
-    out.ownerUserId = Number(ownerId);
   }
   const overdue = one(query, 'overdue');
   if (overdue !== undefined) {

@@ -1,6 +1,7 @@
 import type { MeasurementMethod } from '../../shared/calc/register';
 import type { ContactMaterial } from '../../shared/calc/types';
 import type { UnitSystem } from '../../shared/schemas/common';
+import type { EntryRecord } from './register.repository';
 import type { RegisterStatus } from '../../shared/schemas/register';
 import type { DesignBases } from '../../shared/schemas/sites';
 import { type Db, parseJson } from '../db/db';
@@ -72,7 +73,10 @@ export async function claimReminders(db: Db, owner: string, now: Date, leaseMs: 
 }
 
 /** Everything a claimed reminder's mail needs, read as it is now. */
-export type ReminderDetail = {
+export type ReminderDetail = Pick<
+  EntryRecord,
+  'status' | 'ownerUserId' | 'dueDate' | 'siteName' | 'location' | 'measuredTemperatureC' | 'method' | 'emissivitySetting' | 'surfaceMaterial' | 'surfaceFinishId' | 'withinReach' | 'contactSeconds' | 'action' | 'statusNote'
+> & {
   id: number;
   kind: ReminderKind;
   key: string;
@@ -84,21 +88,7 @@ export type ReminderDetail = {
   recipientInTeam: boolean;
   unitSystem: UnitSystem;
   entryId: number;
-  status: RegisterStatus;
-  ownerUserId: number | null;
-  dueDate: string | null;
-  siteName: string;
   designBases: DesignBases;
-  location: string;
-  measuredTemperatureC: number;
-  method: MeasurementMethod;
-  emissivitySetting: number | null;
-  surfaceMaterial: ContactMaterial;
-  surfaceFinishId: string | null;
-  withinReach: boolean;
-  contactSeconds: number | null;
-  action: string;
-  statusNote: string;
   assignedByName: string | null;
   lastChangedByName: string | null;
 };

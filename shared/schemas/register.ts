@@ -2,7 +2,7 @@ import * as yup from 'yup';
 
 import { CONTACT_MATERIALS } from '../calc/burn';
 import { FINISHES } from '../calc/library/finishes';
-import { MEASUREMENT_METHODS, type MeasurementMethod, type RegisterVerdictValue } from '../calc/register';
+import { MEASUREMENT_METHODS, type MeasurementMethod, type RegisterVerdict, type RegisterVerdictValue } from '../calc/register';
 import type { ContactMaterial } from '../calc/types';
 
 import type { Permission } from './permissions';
@@ -253,4 +253,47 @@ export const VERDICT_WORDS: Record<RegisterVerdictValue, string> = {
   fail: 'Fail: above the limit',
   caution: 'Caution',
   pass: 'Pass: at or below the limit',
+};
+
+/** A team member as the register names them. */
+export type RegisterPerson = { userId: number; name: string };
+
+/** One row of the register: a measured (or recorded) entry, or an item's calculated risk. */
+export type RegisterRow = {
+  source: 'measured' | 'calculated';
+  /** Stable across both kinds: `entry-<id>` or `item-<id>`. */
+  key: string;
+  /** The entry's id; null for a calculated risk (see `item`). */
+  id: number | null;
+  siteId: number;
+  siteName: string;
+  item: { id: number; kind: 'line' | 'vessel'; tag: string } | null;
+  location: string;
+  description: string;
+  measuredTemperatureC: number | null;
+  method: MeasurementMethod;
+  emissivitySetting: number | null;
+  surfaceMaterial: ContactMaterial | null;
+  surfaceFinishId: string | null;
+  withinReach: boolean;
+  contactSeconds: number | null;
+  measuredAt: string | null;
+  /** null for a calculated risk. */
+  status: RegisterStatus | null;
+  action: string;
+  owner: RegisterPerson | null;
+  dueDate: string | null;
+  overdue: boolean;
+  statusNote: string;
+  closedBy: RegisterPerson | null;
+  closedAt: string | null;
+  verificationTemperatureC: number | null;
+  verdict: RegisterVerdict;
+  photoCount: number;
+  version: number | null;
+  createdBy: RegisterPerson | null;
+  createdAt: string | null;
+  updatedAt: string | null;
+  /** When a calculated risk's item was sized. */
+  sizedAt: string | null;
 };

@@ -1,8 +1,18 @@
 import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { MeasurementMethod, RegisterVerdict } from '../../shared/calc/register';
-import type { ContactMaterial } from '../../shared/calc/types';
-import type { AssignInput, EntryCreateInput, EntryPatchInput, MadeSafeInput, ReasonInput, RegisterStatus, RegisterTransition, VerifyInput } from '../../shared/schemas/register';
+import type { RegisterVerdict } from '../../shared/calc/register';
+import type {
+  AssignInput,
+  EntryCreateInput,
+  EntryPatchInput,
+  MadeSafeInput,
+  ReasonInput,
+  RegisterPerson,
+  RegisterRow,
+  RegisterStatus,
+  RegisterTransition,
+  VerifyInput,
+} from '../../shared/schemas/register';
 import { REGISTER_TRANSITIONS } from '../../shared/schemas/register';
 
 import { api, shouldRetry, toProblem, unwrap, type ApiResult } from './client';
@@ -10,42 +20,8 @@ import { staleTimes } from './stale-times';
 
 /** Shapes of the register's answers (docs/api.md, "Surface register"). */
 
-export type Person = { userId: number; name: string };
-
-export interface RegisterRow {
-  source: 'measured' | 'calculated';
-  key: string;
-  id: number | null;
-  siteId: number;
-  siteName: string;
-  item: { id: number; kind: 'line' | 'vessel'; tag: string } | null;
-  location: string;
-  description: string;
-  measuredTemperatureC: number | null;
-  method: MeasurementMethod;
-  emissivitySetting: number | null;
-  surfaceMaterial: ContactMaterial | null;
-  surfaceFinishId: string | null;
-  withinReach: boolean;
-  contactSeconds: number | null;
-  measuredAt: string | null;
-  status: RegisterStatus | null;
-  action: string;
-  owner: Person | null;
-  dueDate: string | null;
-  overdue: boolean;
-  statusNote: string;
-  closedBy: Person | null;
-  closedAt: string | null;
-  verificationTemperatureC: number | null;
-  verdict: RegisterVerdict;
-  photoCount: number;
-  version: number | null;
-  createdBy: Person | null;
-  createdAt: string | null;
-  updatedAt: string | null;
-  sizedAt: string | null;
-}
+export type { RegisterRow };
+export type Person = RegisterPerson;
 
 export interface RegisterPhoto {
   id: number;

@@ -112,9 +112,9 @@ describe('field entry on a phone (390×844)', () => {
     await page.getByTestId(`entry-site-option-${boiler}`).click();
     await fill(page, 'entry-location', 'Flange F-12 by the feed pump');
     await fill(page, 'entry-temperature', '92');
-    await page.getByTestId('entry-method-infrared').click();
+    await page.getByTestId('entry-method').getByRole('radio', { name: 'Infrared', exact: true }).click();
     await fill(page, 'entry-emissivity', '0.95');
-    await page.getByTestId('entry-material-coatedMetal').click();
+    await page.getByTestId('entry-material').getByRole('radio', { name: 'Coated metal', exact: true }).click();
     await page.getByTestId('entry-photo-input').setInputFiles(await photoFile());
     await page.getByRole('img', { name: /Photo 1/ }).waitFor();
     // The verdict follows the reading before anything is saved.
@@ -149,7 +149,7 @@ describe('field entry on a phone (390×844)', () => {
     await gotoApp(page, `${server.url}/register/new`);
     await page.getByTestId('entry-form').waitFor();
     await expect(page.getByTestId('entry-site').getAttribute('aria-label')).resolves.toBe('Site: Boiler house');
-    await expect(page.getByTestId('entry-method-infrared').getAttribute('aria-checked')).resolves.toBe('true');
+    await expect(page.getByTestId('entry-method').getByRole('radio', { name: 'Infrared', exact: true }).getAttribute('aria-checked')).resolves.toBe('true');
     await expect(page.getByTestId('entry-emissivity').inputValue()).resolves.toBe('0.95');
 
     // A wrong file is refused before it is sent, with the reason.
@@ -218,7 +218,7 @@ describe('the whole workflow on a wide screen (1440×900)', () => {
     const engineer = user('engineer');
     const engineerId = ((await server.db('users').where({ email: engineer.email }).first('id')) as { id: number }).id;
     await page.getByTestId(`step-owner-option-${engineerId}`).click();
-    await page.getByTestId('step-due-quick-7').click();
+    await page.getByTestId('step-due-quick').getByRole('radio', { name: 'In a week' }).click();
     await fill(page, 'step-text', 'Fit a removable insulation jacket on the valve.');
     await screenshot(page, 'register-1440x900-03-assign');
     await confirm(page, 'actionAssigned');
@@ -299,12 +299,12 @@ describe('the whole workflow on a wide screen (1440×900)', () => {
     await page.getByTestId('register-list').waitFor();
     // Calculated risks from the seeded sizing are in the list, marked.
     await expect(page.locator('[data-testid^="register-row-item-"][data-source="calculated"]').count()).resolves.toBeGreaterThan(0);
-    await page.getByTestId('register-verdict-caution').click();
+    await page.getByTestId('register-verdict').getByRole('radio', { name: 'Caution', exact: true }).click();
     await page.locator('[data-testid^="register-row-"][data-source="calculated"]').first().waitFor({ state: 'detached' });
     await page.getByText('Strainer F-204 cover').waitFor();
     await screenshot(page, 'register-1440x900-08-filtered');
-    await page.getByTestId('register-verdict-any').click();
-    await page.getByTestId('register-status-closed').click();
+    await page.getByTestId('register-verdict').getByRole('radio', { name: 'Any verdict' }).click();
+    await page.getByTestId('register-status').getByRole('radio', { name: 'Closed', exact: true }).click();
     await page.getByText('Heating coil inlet valve TK-302').waitFor();
     const href = await page.getByTestId('register-export-pdf').getAttribute('href');
     expect(href).toBe('/api/v1/register/export.pdf?status=closed');

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { ApiProblemError } from '../../api/client';
 import { useRegisterEntry, type RegisterEntry } from '../../api/register';
@@ -12,6 +12,7 @@ import { Loading, QueryError } from '../common/query-state';
 import { useHydrated } from '../common/use-hydrated';
 import { Banner, Button, Card, Screen, Text, TextLink } from '../ui';
 
+import { PinnedBar } from './pinned-bar';
 import { EntryComments, EntryDetails, EntryEditForm, EntryHistory, EntryPhotos } from './entry-sections';
 import { StatusBadge } from './status-badge';
 import { StepPanel } from './step-panel';
@@ -169,9 +170,7 @@ export function EntryScreen({ id }: { id: string }) {
         )}
       </Screen>
       {!wide && hasSteps ? (
-        <ScrollView style={styles.bar} contentContainerStyle={styles.barContent} keyboardShouldPersistTaps="handled" testID="entry-bar">
-          {steps}
-        </ScrollView>
+        <PinnedBar testID="entry-bar">{steps}</PinnedBar>
       ) : null}
     </View>
   );
@@ -187,6 +186,4 @@ const styles = StyleSheet.create({
   verdictHead: { gap: spacing.xs },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xl },
   figure: { gap: spacing.xxs },
-  bar: { flexGrow: 0, maxHeight: 460, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
-  barContent: { paddingHorizontal: spacing.lg, paddingTop: spacing.sm, paddingBottom: spacing.md },
 });

@@ -9,9 +9,8 @@ import type { UnitSystem } from '../../calc/units';
 import { colors, radius, spacing } from '../../theme';
 import { formatDateTime } from '../common/format';
 import { NumberField } from '../quick-sizing/number-field';
-import { Banner, Button, Card, Text, TextField, focusRing } from '../ui';
+import { Banner, Button, Card, ChoiceGroup, focusRing, Text, TextField } from '../ui';
 
-import { ChoiceChips } from './choice-chips';
 import { PhotoPicker, type PickedWithPreview } from './photo-picker';
 import { STEP_WORDS } from './step-panel';
 import { MATERIAL_WORDS, METHOD_WORDS, STATUS_WORDS } from './words';
@@ -80,9 +79,9 @@ export function EntryEditForm({ entry, system, onDone }: { entry: RegisterEntry;
     <Card title="Correct the entry" testID="entry-edit">
       <TextField label="Location or tag" value={location} onChangeText={setLocation} error={errors.location} testID="edit-location" />
       <NumberField label="Surface temperature" quantity="temperature" system={system} value={temperatureC} onChange={setTemperatureC} error={errors.measuredTemperatureC} testID="edit-temperature" />
-      <ChoiceChips label="Measured with" value={method} choices={[{ value: 'contact', label: 'Contact probe' }, { value: 'infrared', label: 'Infrared' }]} onChange={setMethod} testID="edit-method" />
+      <ChoiceGroup compact label="Measured with" value={method} choices={[{ value: 'contact', label: 'Contact probe' }, { value: 'infrared', label: 'Infrared' }]} onChange={setMethod} testID="edit-method" />
       {method === 'infrared' ? <NumberField label="Emissivity setting" quantity="ratio" system={system} value={emissivity} onChange={setEmissivity} error={errors.emissivitySetting} testID="edit-emissivity" /> : null}
-      <ChoiceChips label="Reach" value={reach} choices={[{ value: 'yes', label: 'Within reach' }, { value: 'no', label: 'Out of reach' }]} onChange={setReach} testID="edit-reach" />
+      <ChoiceGroup compact label="Reach" value={reach} choices={[{ value: 'yes', label: 'Within reach' }, { value: 'no', label: 'Out of reach' }]} onChange={setReach} testID="edit-reach" />
       <TextField label="Description" value={description} onChangeText={setDescription} multiline error={errors.description} testID="edit-description" />
       {problem ? (
         <Banner tone="fail" title="Not saved">

@@ -11,16 +11,16 @@ import { useSession } from '../../api/session';
 import { useSite, useSites } from '../../api/sites';
 import { formatTemperature } from '../../calc/format';
 import type { UnitSystem } from '../../calc/units';
-import { breakpoints, colors, spacing } from '../../theme';
+import { breakpoints, spacing } from '../../theme';
 import { useHydrated } from '../common/use-hydrated';
 import { Loading, QueryError } from '../common/query-state';
 import { validateWithSchema } from '../forms';
 import { NumberField } from '../quick-sizing/number-field';
 import { SelectField } from '../quick-sizing/select-field';
-import { Banner, Button, Card, EmptyState, Screen, Text, TextField, TextLink } from '../ui';
+import { Banner, Button, Card, ChoiceGroup, EmptyState, Screen, Text, TextField, TextLink } from '../ui';
 
-import { ChoiceChips } from './choice-chips';
 import { readFieldMemory, rememberField } from './field-memory';
+import { PinnedBar } from './pinned-bar';
 import { PhotoPicker, type PickedWithPreview } from './photo-picker';
 import { VerdictBadge } from './verdict-badge';
 import { FINISH_CHOICES, MATERIAL_CHOICES, TALL_LINK, materialOfFinish } from './words';
@@ -196,7 +196,7 @@ export function NewEntryScreen({ start }: { start: NewEntryStart }) {
       ) : (
         <>
           <NumberField label="Surface temperature" quantity="temperature" system={system} value={temperatureC} onChange={setTemperatureC} error={errors.measuredTemperatureC} testID="entry-temperature" />
-          <ChoiceChips label="Measured with" value={method} choices={METHODS} onChange={setMethod} testID="entry-method" />
+          <ChoiceGroup compact label="Measured with" value={method} choices={METHODS} onChange={setMethod} testID="entry-method" />
           {method === 'infrared' ? (
             <NumberField
               label="Emissivity setting"
@@ -211,8 +211,8 @@ export function NewEntryScreen({ start }: { start: NewEntryStart }) {
           ) : null}
         </>
       )}
-      <ChoiceChips label="Surface" value={material} choices={MATERIAL_CHOICES} onChange={setMaterial} error={errors.surfaceMaterial} testID="entry-material" />
-      <ChoiceChips label="Reach" value={reach} choices={REACH} onChange={setReach} testID="entry-reach" />
+      <ChoiceGroup compact label="Surface" value={material} choices={MATERIAL_CHOICES} onChange={setMaterial} error={errors.surfaceMaterial} testID="entry-material" />
+      <ChoiceGroup compact label="Reach" value={reach} choices={REACH} onChange={setReach} testID="entry-reach" />
       <Text variant="caption" tone="textMuted">
         Within reach: someone on a walkway, platform or ladder can touch it.
       </Text>
@@ -275,10 +275,10 @@ export function NewEntryScreen({ start }: { start: NewEntryStart }) {
         )}
       </Screen>
       {!wide ? (
-        <View style={styles.bar} testID="entry-bar">
+        <PinnedBar testID="entry-bar">
           <LiveVerdict verdict={verdict} system={system} compact />
           {saveButton}
-        </View>
+        </PinnedBar>
       ) : null}
     </View>
   );
@@ -295,13 +295,4 @@ const styles = StyleSheet.create({
   liveCompact: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   liveText: { flexShrink: 1 },
   save: { minHeight: 52 },
-  bar: {
-    gap: spacing.sm,
-    paddingHorizontal: spacing.lg,
-    paddingTop: spacing.sm,
-    paddingBottom: spacing.md,
-    backgroundColor: colors.surface,
-    borderTopWidth: 1,
-    borderTopColor: colors.border,
-  },
 });

@@ -12,9 +12,9 @@ import { formatDate } from '../common/format';
 import { Loading, QueryError } from '../common/query-state';
 import { useHydrated } from '../common/use-hydrated';
 import { SelectField } from '../quick-sizing/select-field';
-import { Button, EmptyState, Screen, Text, TextField } from '../ui';
+import { Button, ChoiceGroup, EmptyState, Screen, Text, TextField } from '../ui';
 
-import { ChoiceChips } from './choice-chips';
+import { PinnedBar } from './pinned-bar';
 import { StatusBadge } from './status-badge';
 import { VerdictBadge } from './verdict-badge';
 import { METHOD_WORDS, wholeDegrees } from './words';
@@ -152,7 +152,7 @@ export function RegisterScreen({ initialSiteId }: { initialSiteId?: string }) {
   const newEntryHref = `/register/new${siteId ? `?siteId=${siteId}` : ''}`;
 
   const extraFilters = [siteId !== '', verdict !== 'any', mine, overdue, q.trim() !== ''].filter(Boolean).length;
-  const statusChips = <ChoiceChips label="Status" value={status} choices={STATUS_FILTERS} onChange={setStatus} testID="register-status" />;
+  const statusChips = <ChoiceGroup compact label="Status" value={status} choices={STATUS_FILTERS} onChange={setStatus} testID="register-status" />;
   const more = (
     <>
       <View style={wide ? styles.filterRow : styles.filterStack}>
@@ -170,7 +170,7 @@ export function RegisterScreen({ initialSiteId }: { initialSiteId?: string }) {
         </View>
       </View>
       <View style={wide ? styles.filterRow : styles.filterStack}>
-        <ChoiceChips label="Verdict" value={verdict} choices={VERDICT_FILTERS} onChange={setVerdict} testID="register-verdict" />
+        <ChoiceGroup compact label="Verdict" value={verdict} choices={VERDICT_FILTERS} onChange={setVerdict} testID="register-verdict" />
         <View style={styles.toggles}>
           <Button label={mine ? '✓ Mine only' : 'Mine only'} variant="secondary" onPress={() => setMine((m) => !m)} testID="register-mine" aria-pressed={mine} />
           <Button label={overdue ? '✓ Overdue only' : 'Overdue only'} variant="secondary" onPress={() => setOverdue((o) => !o)} testID="register-overdue" aria-pressed={overdue} />
@@ -253,9 +253,9 @@ export function RegisterScreen({ initialSiteId }: { initialSiteId?: string }) {
         </Text>
       </Screen>
       {!wide && mayCreate ? (
-        <View style={styles.bar}>
+        <PinnedBar>
           <Button label="Record a hot surface" icon="plus" block onPress={() => router.push(newEntryHref as never)} testID="register-new" style={styles.barButton} />
-        </View>
+        </PinnedBar>
       ) : null}
     </View>
   );
@@ -304,6 +304,5 @@ const styles = StyleSheet.create({
   colVerdict: { flex: 1.2 },
   colStatus: { flex: 2.2, gap: spacing.xxs },
   reading: { gap: 0 },
-  bar: { paddingHorizontal: spacing.lg, paddingVertical: spacing.sm, backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.border },
   barButton: { minHeight: 52 },
 });

@@ -11,9 +11,8 @@ import { spacing } from '../../theme';
 import { validateWithSchema } from '../forms';
 import { NumberField } from '../quick-sizing/number-field';
 import { SelectField } from '../quick-sizing/select-field';
-import { Banner, Button, Text, TextField } from '../ui';
+import { Banner, Button, ChoiceGroup, Text, TextField } from '../ui';
 
-import { ChoiceChips } from './choice-chips';
 
 /** The words of each step: its button, what its text field asks, its confirm button. */
 export const STEP_WORDS: Record<RegisterTransition, { button: string; field: string; confirm: string; variant: 'primary' | 'secondary' | 'danger' }> = {
@@ -103,7 +102,7 @@ function StepForm({ entry, name, system, onDone }: { entry: RegisterEntry; name:
           {errors.ownerUserId ? (
             <Text variant="caption" weight="semibold" tone="fail" role="alert">{`Error: ${errors.ownerUserId}`}</Text>
           ) : null}
-          <ChoiceChips
+          <ChoiceGroup compact
             label="Due"
             value={DUE_CHOICES.find((c) => dayPlus(Number(c.value)) === due)?.value ?? null}
             choices={DUE_CHOICES}
@@ -117,7 +116,7 @@ function StepForm({ entry, name, system, onDone }: { entry: RegisterEntry; name:
         <>
           <NumberField label="New reading (optional)" quantity="temperature" system={system} value={reading} onChange={setReading} error={errors.measuredTemperatureC} testID="step-reading" />
           {reading !== null ? (
-            <ChoiceChips
+            <ChoiceGroup compact
               label="Measured with"
               value={method}
               choices={[
