@@ -4,6 +4,7 @@
  *   calc CLI wall time for 10,000 analyses and 1,000 thickness solves, process start included [s]
  *   API health latency while a 10,000-case batch runs [ms]
  *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
+ *   register photo from a 40-megapixel JPEG and PNG: time [ms] and peak resident memory [MB]
  * `--json` prints one JSON object of named figures instead of the table.
  */
 import { spawnSync } from 'node:child_process';
@@ -90,6 +91,7 @@ const figures = {
   cliSolve1000: cliWall('solve', 1000, 4),
   apiHealthDuring10000Batch: apiUnderLoad(),
   quickSizingPaint: process.argv.includes('--no-browser') ? null : firstPaint(),
+  registerPhoto40mp: runJsonScript('bench-photos.ts', [], process.env),
 };
 
 if (asJson) {
@@ -106,4 +108,8 @@ if (asJson) {
   if (h) console.log(`API: 10,000-case batch ${h.batchSeconds ?? '–'} s; health during it median ${h.healthMedianMs ?? '–'} ms, max ${h.healthMaxMs ?? '–'} ms over ${h.healthSamples ?? 0} requests (target < 200 ms)${h.note ? ' — ' + h.note : ''}`);
   const p = figures.quickSizingPaint;
   if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
+  const ph = figures.registerPhoto40mp as { jpeg40mp?: { ms: number; rssRiseMB: number }; png40mp?: { ms: number; rssRiseMB: number }; note?: string };
+  if (ph.jpeg40mp && ph.png40mp) {
+    console.log(`register photo, 40 MP: JPEG ${ph.jpeg40mp.ms} ms, memory +${ph.jpeg40mp.rssRiseMB} MB; PNG ${ph.png40mp.ms} ms, memory +${ph.png40mp.rssRiseMB} MB (target < 150 MB)`);
+  } else console.log(`register photo, 40 MP: ${ph.note ?? 'no figures'}`);
 }
