@@ -267,9 +267,10 @@ export async function registerRows(deps: RegisterDeps, caller: Caller, q: Regist
   const onlyForUserId = visibleTo(caller);
   if (q.siteId !== undefined && !(await findSite(deps.db, caller.teamId, q.siteId, onlyForUserId))) throw errors.notFound('The site');
   const today = dayOf(deps.now());
+  const materialOf = await contactMaterialResolver(deps.db, caller.teamId);
   const [records, risks] = await Promise.all([
     repo.listEntries(deps.db, caller.teamId, { siteId: q.siteId, q: q.q, onlyForUserId }, REGISTER_READ_MAX),
-    repo.listCalculatedRisks(deps.db, caller.teamId, { siteId: q.siteId, q: q.q, onlyForUserId }, () => null, REGISTER_READ_MAX),
+    repo.listCalculatedRisks(deps.db, caller.teamId, { siteId: q.siteId, q: q.q, onlyForUserId }, materialOf, REGISTER_READ_MAX),
   ]);
   const bases = await repo.siteBases(deps.db, caller.teamId, records.map((e) => e.siteId));
   const measured = records.map((e) => entryView(e, touchBasisOf(bases.get(e.siteId)), today));

@@ -453,7 +453,8 @@ describe('calculated risks', () => {
 
   it('when sizing leaves a surface above the touch limit, then the line appears on the register as calculated, until it is re-sized below the limit', async () => {
     const row = (await owner.get(`/api/v1/register?siteId=${calcSite}`).expect(200)).body.entries.find((r: { source: string }) => r.source === 'calculated');
-    expect(row).toMatchObject({ source: 'calculated', id: null, item: { id: lineId, kind: 'line', tag: 'L-100' }, status: null, verdict: { verdict: 'fail' } });
+    // Bare oxidised carbon steel: an uncoated metal for the burn threshold.
+    expect(row).toMatchObject({ source: 'calculated', id: null, item: { id: lineId, kind: 'line', tag: 'L-100' }, status: null, surfaceMaterial: 'uncoatedMetal', verdict: { verdict: 'fail' } });
     expect(row.measuredTemperatureC).toBeGreaterThan(row.verdict.limitC);
     expect(await calculated()).toEqual([lineId]);
     // Editing the line makes its result stale: a stale result is not a current risk.

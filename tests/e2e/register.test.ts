@@ -297,8 +297,23 @@ describe('the whole workflow on a wide screen (1440×900)', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Register' }).click();
     await page.waitForURL('**/register');
     await page.getByTestId('register-list').waitFor();
-    // Calculated risks from the seeded sizing are in the list, marked.
-    await expect(page.locator('[data-testid^="register-row-item-"][data-source="calculated"]').count()).resolves.toBeGreaterThan(0);
+    // Calculated risks from the seeded sizing are in the list, marked; one is taken onto the register.
+    const risks = page.locator('[data-testid^="register-row-item-"][data-source="calculated"]');
+    await expect(risks.count()).resolves.toBeGreaterThan(0);
+    const riskKey = (await risks.first().getAttribute('data-testid'))!.replace('register-row-', '');
+    const itemId = Number(riskKey.replace('item-', ''));
+    await risks.first().click();
+    await page.waitForURL('**/register/new?*method=calculated*');
+    await page.getByText('Calculated by sizing').waitFor();
+    await page.getByTestId('entry-save').click();
+    await page.locator('[data-testid="entry-screen"][data-status="open"]').waitFor();
+    const recorded = await server.db('register_entries').where({ item_id: itemId }).first();
+    expect(recorded).toMatchObject({ method: 'calculated', status: 'open' });
+    await screenshot(page, 'register-1440x900-08a-calculated-recorded');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Register' }).click();
+    await page.getByTestId('register-list').waitFor();
+    await expect(page.getByTestId(`register-row-${riskKey}`).count()).resolves.toBe(0);
+    await page.getByTestId(`register-row-entry-${recorded.id}`).waitFor();
     await page.getByTestId('register-verdict').getByRole('radio', { name: 'Caution', exact: true }).click();
     await page.locator('[data-testid^="register-row-"][data-source="calculated"]').first().waitFor({ state: 'detached' });
     await page.getByText('Strainer F-204 cover').waitFor();
