@@ -4,6 +4,23 @@ const tsJest: Config['transform'] = {
   '^.+\\.tsx?$': ['ts-jest', { diagnostics: false }],
 };
 
+/**
+ * file-type is ESM-only: the projects that run server code map it to its Node entry and let Babel turn it and
+ * its ESM dependencies into CommonJS (the server itself loads it with a dynamic import()).
+ */
+const ESM_PACKAGES = ['file-type', 'strtok3', 'token-types', '@tokenizer/inflate', 'uint8array-extras', '@borewit/text-codec'];
+const serverSide: Pick<Config, 'transform' | 'transformIgnorePatterns' | 'moduleNameMapper'> = {
+  transform: {
+    ...tsJest,
+    [`node_modules/(${ESM_PACKAGES.join('|')})/.+\\.js$`]: [
+      'babel-jest',
+      { babelrc: false, configFile: false, plugins: ['@babel/plugin-transform-modules-commonjs'] },
+    ],
+  },
+  transformIgnorePatterns: [`/node_modules/(?!(${ESM_PACKAGES.join('|')})/)`],
+  moduleNameMapper: { '^file-type$': '<rootDir>/node_modules/file-type/index.js' },
+};
+
 const config: Config = {
   projects: [
     {
@@ -15,7 +32,7 @@ const config: Config = {
     {
       displayName: 'api',
       testEnvironment: 'node',
-      transform: tsJest,
+      ...serverSide,
       testMatch: ['<rootDir>/server/**/*.test.ts', '<rootDir>/tests/api/**/*.test.ts'],
     },
     {
@@ -26,7 +43,7 @@ const config: Config = {
     {
       displayName: 'e2e',
       testEnvironment: 'node',
-      transform: tsJest,
+      ...serverSide,
       testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'],
     },
   ],

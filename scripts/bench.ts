@@ -4,6 +4,7 @@
  *   calc CLI wall time for 10,000 analyses and 1,000 thickness solves, process start included [s]
  *   API health and single-case latency while a 10,000-case batch runs [ms]
  *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
+ *   register photo from a 40-megapixel JPEG and PNG: time [ms] and peak resident memory [MB]
  * `--json` prints one JSON object of named figures instead of the table.
  */
 import { spawnSync } from 'node:child_process';
@@ -95,6 +96,7 @@ const figures = {
   apiHealthDuring10000Batch: apiUnderLoad(),
   ...lineLists(),
   quickSizingPaint: process.argv.includes('--no-browser') ? null : firstPaint(),
+  registerPhoto40mp: runJsonScript('bench-photos.ts', [], process.env),
 };
 
 if (asJson) {
@@ -116,4 +118,8 @@ if (asJson) {
   console.log(`line list: 10,000 lines sized through the job in ${l.sizeSite10kLinesS ?? '–'} s (target ≤ 10 s); health during it median ${l.healthDuringSizingMedianMs ?? '–'} ms, max ${l.healthDuringSizingMaxMs ?? '–'} ms (target < 200 ms); first page of 1,000 lines ${l.listPage1000Ms ?? '–'} ms (target ≤ 300 ms)`);
   const p = figures.quickSizingPaint;
   if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
+  const ph = figures.registerPhoto40mp as { jpeg40mp?: { ms: number; rssRiseMB: number }; png40mp?: { ms: number; rssRiseMB: number }; note?: string };
+  if (ph.jpeg40mp && ph.png40mp) {
+    console.log(`register photo, 40 MP: JPEG ${ph.jpeg40mp.ms} ms, memory +${ph.jpeg40mp.rssRiseMB} MB; PNG ${ph.png40mp.ms} ms, memory +${ph.png40mp.rssRiseMB} MB (target < 150 MB)`);
+  } else console.log(`register photo, 40 MP: ${ph.note ?? 'no figures'}`);
 }

@@ -24,16 +24,27 @@ import { registerSizingRoutes } from './sizing/sizing.routes';
 import { createLogger, type Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 import { registerMeRoutes } from './me/me.routes';
+import { registerRegisterRoutes } from './register/register.routes';
+import { createReminderScheduler, type ReminderScheduler } from './register/reminders';
 import { registerSiteRoutes } from './sites/sites.routes';
 import { registerTeamRoutes } from './team/team.routes';
 
-export type AppOptions = { db: Db; mailer: Mailer; config: Config; logger?: Logger; calc?: CalcPool };
+export type AppOptions = {
+  db: Db;
+  mailer: Mailer;
+  config: Config;
+  logger?: Logger;
+  calc?: CalcPool;
+  /** The clock [ms since epoch]; tests pass their own. */
+  now?: () => number;
+};
 
 export type LaglineApp = Express & {
   locals: {
     apiRouter: Router;
     calc: CalcPool;
     jobs: JobRunner;
+    reminders: ReminderScheduler;
     /** Stops what the app runs in the background (worker threads, the session expiry sweep). */
     close: () => Promise<void>;
   };
@@ -42,7 +53,7 @@ export type LaglineApp = Express & {
 const CALCULATIONS = '/v1/calculations';
 
 /** Builds the whole HTTP application. Never listens (server/index.ts and tests do). */
-export function createApp({ db, mailer, config, logger = createLogger(config.logLevel), calc }: AppOptions): LaglineApp {
+export function createApp({ db, mailer, config, logger = createLogger(config.logLevel), calc, now = Date.now }: AppOptions): LaglineApp {
   const app = express() as LaglineApp;
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
@@ -61,7 +72,10 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
     calc: pool,
     jobs,
     secureCookies: tls,
+    now,
   };
+  // Register reminders: started by server/index.ts (tests drive tick() themselves).
+  const reminders = createReminderScheduler({ db, mailer, config, logger, now });
 
   app.use(requestId);
   app.use(securityHeaders({ scriptHashes: inlineScriptHashes(config.distDir), tls }));
@@ -98,6 +112,7 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   registerLibraryRoutes(api, deps);
   registerLineRoutes(api, deps);
   registerSizingRoutes(api, deps);
+  registerRegisterRoutes(api, deps, reminders.poke);
   registerDevMailRoutes(api, deps);
   registerCalculationRoutes(api, deps);
   app.use(api);
@@ -105,8 +120,10 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   app.locals.apiRouter = api;
   app.locals.calc = deps.calc;
   app.locals.jobs = jobs;
+  app.locals.reminders = reminders;
   app.locals.close = async () => {
     await jobs.stop();
+    await reminders.stop();
     sessions.close();
     await deps.calc.close();
   };

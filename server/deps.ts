@@ -18,4 +18,6 @@ export type Deps = {
   jobs: JobRunner;
   /** APP_URL is https: cookies are marked Secure on every answer. */
   secureCookies: boolean;
+  /** The clock [ms since epoch], injectable for tests. */
+  now: () => number;
 };

@@ -39,6 +39,8 @@ async function main(): Promise<void> {
   const app = createApp({ db, mailer, config, logger });
   // Jobs interrupted by a stop (or left by another process that stopped) continue here.
   app.locals.jobs.start();
+  // Register reminders (assignment, due soon, overdue, requests to verify); their state is in MariaDB.
+  app.locals.reminders.start();
 
   const server = app.listen(config.port, config.host, () => {
     const { port } = server.address() as AddressInfo;

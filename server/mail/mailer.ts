@@ -2,7 +2,7 @@ import nodemailer from 'nodemailer';
 import type { Config } from '../config';
 
 /** What a message is about; the in-app view of caught mail never shows a password reset. */
-export type MailKind = 'invitation' | 'password-reset';
+export type MailKind = 'invitation' | 'password-reset' | 'register-reminder';
 
 export type OutgoingMail = {
   to: string;

@@ -30,6 +30,8 @@ export const PERMISSIONS = {
   'surfaces.create': ['owner', 'engineer', 'safety', 'contractor'],
   'surfaces.assign': ['owner', 'safety'],
   'surfaces.verify': ['owner', 'safety'],
+  /** Close a surface-register entry as accepted, with a reason. */
+  'surfaces.accept': ['owner', 'safety'],
   /** Read caught development mail. */
   'dev.mail': ['owner'],
 } as const satisfies Record<string, readonly Role[]>;

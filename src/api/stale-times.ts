@@ -8,6 +8,8 @@ export const staleTimes = {
   devMail: 0,
   /** Site list. */
   sites: 60_000,
+  /** The surface register: others record and close entries during a plant walk. */
+  register: 15_000,
   /** A single invitation preview. */
   invitation: 60_000,
 } as const;

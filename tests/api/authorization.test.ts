@@ -1,4 +1,8 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import express from 'express';
+import sharp from 'sharp';
 import request from 'supertest';
 import { insertPasswordReset } from '../../server/auth/password-resets.repository';
 import { newToken } from '../../server/auth/passwords';
@@ -19,6 +23,7 @@ let teamId: number;
 const users = {} as Record<Role, { email: string; userId: number }>;
 let siteId: number;
 let resetUserId: number;
+let uploadDir: string;
 
 const CASE = {
   geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
@@ -29,7 +34,8 @@ const CASE = {
 };
 
 beforeAll(async () => {
-  ctx = await createApiContext();
+  uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), 'lagline-matrix-'));
+  ctx = await createApiContext({ config: { uploadDir } });
   const o = await signUpOwner(ctx, { teamName: 'Matrix Works' });
   owner = o.agent;
   ownerId = o.userId;
@@ -41,11 +47,13 @@ beforeAll(async () => {
   }
   siteId = await insertSite(ctx.db, { teamId, name: 'Matrix site', description: '', designBases: {}, createdBy: ownerId });
   await addSiteMember(ctx.db, siteId, users.contractor.userId, ownerId);
+  photoJpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#b23a12' } }).jpeg().toBuffer();
   const resettee = await signUpOwner(ctx, { teamName: 'Reset team' });
   resetUserId = resettee.userId;
 }, 60_000);
 afterAll(async () => {
   await ctx.close();
+  fs.rmSync(uploadDir, { recursive: true, force: true });
 });
 
 /**
@@ -103,9 +111,29 @@ const SPEC: Record<string, 'public' | 'signedIn' | { permission: Permission; rol
   'GET /api/v1/sites/:siteId/overview': { permission: 'site.read', roles: ALL },
   'GET /api/v1/sites/:siteId/sizing-settings': { permission: 'site.read', roles: ALL },
   'PATCH /api/v1/sites/:siteId/sizing-settings': { permission: 'site.edit', roles: ['owner', 'engineer'] },
+  'GET /api/v1/register': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/register/export.csv': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/register/export.pdf': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/register/settings': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/register/settings': { permission: 'team.manage', roles: ['owner'] },
+  'POST /api/v1/sites/:siteId/register': { permission: 'surfaces.create', roles: ['owner', 'engineer', 'safety', 'contractor'] },
+  'GET /api/v1/register/entries/:id': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/register/entries/:id': { permission: 'surfaces.create', roles: ['owner', 'engineer', 'safety', 'contractor'] },
+  'POST /api/v1/register/entries/:id/assign': { permission: 'surfaces.assign', roles: ['owner', 'safety'] },
+  'POST /api/v1/register/entries/:id/made-safe': { permission: 'surfaces.create', roles: ['owner', 'engineer', 'safety', 'contractor'] },
+  'POST /api/v1/register/entries/:id/verify': { permission: 'surfaces.verify', roles: ['owner', 'safety'] },
+  'POST /api/v1/register/entries/:id/send-back': { permission: 'surfaces.verify', roles: ['owner', 'safety'] },
+  'POST /api/v1/register/entries/:id/accept': { permission: 'surfaces.accept', roles: ['owner', 'safety'] },
+  'POST /api/v1/register/entries/:id/reopen': { permission: 'surfaces.assign', roles: ['owner', 'safety'] },
+  'POST /api/v1/register/entries/:id/comments': { permission: 'surfaces.create', roles: ['owner', 'engineer', 'safety', 'contractor'] },
+  'POST /api/v1/register/entries/:id/photos': { permission: 'surfaces.create', roles: ['owner', 'engineer', 'safety', 'contractor'] },
+  'GET /api/v1/register/photos/:id/image': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/register/photos/:id/thumbnail': { permission: 'site.read', roles: ALL },
+  'DELETE /api/v1/register/photos/:id': { permission: 'surfaces.assign', roles: ['owner', 'safety'] },
 };
 
-type Sample = { path: string; body?: unknown };
+/** `photo`: sent as multipart field "photos" instead of a JSON body. */
+type Sample = { path: string; body?: unknown; photo?: Buffer };
 let n = 0;
 const freshInvitation = async () => {
   const { token, hash } = newToken();
@@ -136,6 +164,27 @@ const freshLine = () => created(`/api/v1/sites/${siteId}/lines`, { ...LINE, tag:
 const freshVessel = () => created(`/api/v1/sites/${siteId}/vessels`, { ...VESSEL, tag: `V-${n++}` }, 'vessel');
 const freshMaterial = () => created('/api/v1/library/materials', { ...MATERIAL, name: `Foam ${n++}` }, 'material');
 const freshFinish = () => created('/api/v1/library/finishes', { ...FINISH, name: `Sheet ${n++}` }, 'finish');
+const REGISTER_ENTRY = { location: 'Matrix flange', measuredTemperatureC: 90, method: 'contact', surfaceMaterial: 'uncoatedMetal', withinReach: true };
+const inAWeek = () => new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
+let photoJpeg: Buffer;
+/** A register entry on the matrix site (the contractor is invited to it), taken to the given status by the owner. */
+async function freshEntry(status: 'open' | 'actionAssigned' | 'madeSafe' | 'accepted' = 'open'): Promise<number> {
+  const id = await created(`/api/v1/sites/${siteId}/register`, REGISTER_ENTRY, 'entry');
+  const step = (name: string, body: object) => owner.post(`/api/v1/register/entries/${id}/${name}`).set('X-CSRF-Token', owner.csrf).send(body).expect(200);
+  if (status === 'actionAssigned' || status === 'madeSafe') await step('assign', { ownerUserId: users.engineer.userId, dueDate: inAWeek(), action: 'Cover it' });
+  if (status === 'madeSafe') await step('made-safe', { note: 'Covered' });
+  if (status === 'accepted') await step('accept', { reason: 'Out of reach' });
+  return id;
+}
+async function freshPhoto(): Promise<number> {
+  const res = await owner
+    .post(`/api/v1/sites/${siteId}/register`)
+    .set('X-CSRF-Token', owner.csrf)
+    .field('entry', JSON.stringify(REGISTER_ENTRY))
+    .attach('photos', photoJpeg, 'matrix.jpg')
+    .expect(201);
+  return res.body.entry.photos[0].id;
+}
 const freshSite = () => insertSite(ctx.db, { teamId, name: `Doomed ${n++}`, description: '', designBases: {}, createdBy: ownerId });
 
 /** A request each route answers with success when the caller may use it. Every route needs one. */
@@ -207,6 +256,28 @@ const SAMPLES: Record<string, () => Promise<Sample>> = {
   'GET /api/v1/sites/:siteId/overview': async () => ({ path: `/api/v1/sites/${siteId}/overview` }),
   'GET /api/v1/sites/:siteId/sizing-settings': async () => ({ path: `/api/v1/sites/${siteId}/sizing-settings` }),
   'PATCH /api/v1/sites/:siteId/sizing-settings': async () => ({ path: `/api/v1/sites/${siteId}/sizing-settings`, body: { heatConservationMaxPercentOfBare: 5 + (n++ % 10) } }),
+  'GET /api/v1/register': async () => ({ path: `/api/v1/register?siteId=${siteId}` }),
+  'GET /api/v1/register/export.csv': async () => ({ path: `/api/v1/register/export.csv?siteId=${siteId}` }),
+  'GET /api/v1/register/export.pdf': async () => ({ path: `/api/v1/register/export.pdf?siteId=${siteId}&status=active` }),
+  'GET /api/v1/register/settings': async () => ({ path: '/api/v1/register/settings' }),
+  'PATCH /api/v1/register/settings': async () => ({ path: '/api/v1/register/settings', body: { keepPhotoLocation: false } }),
+  'POST /api/v1/sites/:siteId/register': async () => ({ path: `/api/v1/sites/${siteId}/register`, body: REGISTER_ENTRY }),
+  'GET /api/v1/register/entries/:id': async () => ({ path: `/api/v1/register/entries/${await freshEntry()}` }),
+  'PATCH /api/v1/register/entries/:id': async () => ({ path: `/api/v1/register/entries/${await freshEntry()}`, body: { measuredTemperatureC: 92 } }),
+  'POST /api/v1/register/entries/:id/assign': async () => ({
+    path: `/api/v1/register/entries/${await freshEntry()}/assign`,
+    body: { ownerUserId: users.engineer.userId, dueDate: inAWeek(), action: 'Fit a cover' },
+  }),
+  'POST /api/v1/register/entries/:id/made-safe': async () => ({ path: `/api/v1/register/entries/${await freshEntry('actionAssigned')}/made-safe`, body: { note: 'Cover fitted' } }),
+  'POST /api/v1/register/entries/:id/verify': async () => ({ path: `/api/v1/register/entries/${await freshEntry('madeSafe')}/verify`, body: { note: 'Checked' } }),
+  'POST /api/v1/register/entries/:id/send-back': async () => ({ path: `/api/v1/register/entries/${await freshEntry('madeSafe')}/send-back`, body: { reason: 'Cover loose' } }),
+  'POST /api/v1/register/entries/:id/accept': async () => ({ path: `/api/v1/register/entries/${await freshEntry()}/accept`, body: { reason: 'Guarded by position' } }),
+  'POST /api/v1/register/entries/:id/reopen': async () => ({ path: `/api/v1/register/entries/${await freshEntry('accepted')}/reopen`, body: { reason: 'Access changed' } }),
+  'POST /api/v1/register/entries/:id/comments': async () => ({ path: `/api/v1/register/entries/${await freshEntry()}/comments`, body: { body: 'Seen on the walk' } }),
+  'POST /api/v1/register/entries/:id/photos': async () => ({ path: `/api/v1/register/entries/${await freshEntry()}/photos`, photo: photoJpeg }),
+  'GET /api/v1/register/photos/:id/image': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}/image` }),
+  'GET /api/v1/register/photos/:id/thumbnail': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}/thumbnail` }),
+  'DELETE /api/v1/register/photos/:id': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}` }),
 };
 
 async function agentFor(role: Role | 'anonymous'): Promise<Agent> {
@@ -276,7 +347,8 @@ describe('role matrix', () => {
         const agent = await agentFor(who);
         const method = r.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
         let req = agent[method](sample.path).set('X-CSRF-Token', agent.csrf);
-        if (sample.body !== undefined) req = req.send(sample.body as object);
+        if (sample.photo) req = req.attach('photos', sample.photo, 'matrix.jpg');
+        else if (sample.body !== undefined) req = req.send(sample.body as object);
         const res = await req;
         const expected = expectedOutcome(r, who);
         const ok = expected === 'allowed' ? res.status >= 200 && res.status < 300 : res.status === expected;

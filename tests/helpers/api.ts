@@ -18,22 +18,24 @@ export type ApiContext = {
   app: LaglineApp;
   mail: TestMail;
   mailer: Mailer;
-  /** A new app on the same database and secret (a server restart), optionally on another handle to it. */
-  restart: (overrides?: Partial<Config>, opts?: { db?: Knex }) => LaglineApp;
+  /** A new app on the same database and secret (a server restart, or a second process), optionally on another handle to it and with its own clock. */
+  restart: (overrides?: Partial<Config>, opts?: { db?: Knex; now?: () => number }) => LaglineApp;
   /** A cookie-keeping client that has fetched its CSRF token. */
   agent: (app?: LaglineApp) => Promise<Agent>;
   close: () => Promise<void>;
 };
 
 /** supertest against createApp on a fresh database, with a mail catcher. */
-export async function createApiContext(opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined> } = {}): Promise<ApiContext> {
+export async function createApiContext(
+  opts: { seed?: boolean; config?: Partial<Config>; env?: Record<string, string | undefined>; now?: () => number } = {},
+): Promise<ApiContext> {
   const database = await createTestDatabase({ seed: opts.seed });
   const mail = await startTestMail(database.db);
   const config = testConfig(opts.config, opts.env);
   const mailer = createMailer({ mailFrom: config.mailFrom, smtp: { host: '127.0.0.1', port: mail.port } });
   const apps: LaglineApp[] = [];
-  const make = (overrides: Partial<Config> = {}, opts: { db?: Knex } = {}) => {
-    const a = createApp({ db: opts.db ?? database.db, mailer, config: Object.freeze({ ...config, ...overrides }) });
+  const make = (overrides: Partial<Config> = {}, appOpts: { db?: Knex; now?: () => number } = {}) => {
+    const a = createApp({ db: appOpts.db ?? database.db, mailer, config: Object.freeze({ ...config, ...overrides }), now: appOpts.now ?? opts.now });
     apps.push(a);
     return a;
   };

@@ -11,6 +11,7 @@ import type { UnitSystem } from '../../calc/units';
 import { colors, radius, spacing } from '../../theme';
 import { formatDate } from '../common/format';
 import { Loading, QueryError } from '../common/query-state';
+import { SiteRegisterSection } from '../register/site-register-section';
 import { Banner, Button, Card, EmptyState, Screen, Text, TextLink } from '../ui';
 
 import { BASES, displayValue, type BasisSpec, type EditScope } from './design-basis-fields';
@@ -154,6 +155,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
               />
             ) : null
           ) : null}
+          <SiteRegisterSection siteId={String(s.id)} />
           <View style={styles.bases}>
             {BASES.map((b) => (
               <View key={b.key} style={styles.basis}>

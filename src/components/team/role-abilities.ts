@@ -18,6 +18,7 @@ const PERMISSION_WORDS: Record<Permission, string> = {
   'surfaces.create': 'record surfaces in the hot-surface register',
   'surfaces.assign': 'assign actions in the register',
   'surfaces.verify': 'verify and close register items',
+  'surfaces.accept': 'accept a register item as it is, with a reason',
   'dev.mail': 'read mail caught in development',
 };
 
