@@ -8,7 +8,7 @@ import { conductivityIntegral } from '../../shared/calc/conduction';
 import type { CalcCase, CalcResult, Layer } from '../../shared/calc/types';
 
 import { annualEnergy, type EnergyFigures } from './energy';
-import { DraftIncomplete, draftToCase, roundingOf, type Draft } from './quick-case';
+import { DraftIncomplete, draftToCase, roundingOf, type Draft, type EnergyAssumptions } from './quick-case';
 import { validateDraft, type FieldErrors } from './validation';
 import type { UnitSystem } from './units';
 
@@ -170,9 +170,23 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
     if (e instanceof DraftIncomplete) return { kind: 'invalid', errors: { [e.field]: 'Enter a number.' } };
     throw e;
   }
+  return evaluateCase(c, roundingOf(d).seriesM, d.energy, () => adviceFor(d));
+}
+
+/**
+ * The full output for one case: its result, the bare-surface comparison, the thickness sweeps over the
+ * series range, the temperature profile and the annual figures (none without `energy`). Used for a
+ * quick-sizing draft and for the cases of a line-list item alike.
+ */
+export function evaluateCase(
+  c: CalcCase,
+  seriesM: readonly number[],
+  energy: EnergyAssumptions | null,
+  advice: () => string[] = () => [],
+): Exclude<LiveOutput, { kind: 'invalid' }> {
   const outcome = runCase(c);
   if ('error' in outcome) {
-    return { kind: 'error', case: c, ...outcome.error, advice: outcome.error.code === 'TARGET_NOT_REACHABLE' ? adviceFor(d) : [] };
+    return { kind: 'error', case: c, ...outcome.error, advice: outcome.error.code === 'TARGET_NOT_REACHABLE' ? advice() : [] };
   }
   const result = outcome;
   let bare: CalcResult | null = null;
@@ -184,8 +198,7 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
   }
   const heatFlow = heatFlowOf(c, result);
   const bareHeatFlow = bare ? heatFlowOf(c, bare) : null;
-  const series = roundingOf(d).seriesM;
-  const swept = sweep(c, series);
+  const swept = sweep(c, seriesM);
   const layers = evaluatedLayers(c, result);
   const chosenThicknessM = c.solveFor
     ? result.totalThicknessM - c.layers.slice(0, -1).reduce((s, l) => s + l.thicknessM, 0)
@@ -193,6 +206,6 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
       ? layers[layers.length - 1].thicknessM
       : null;
   const { points, boundaries } = temperatureProfile(c, result);
-  const energy = annualEnergy(heatFlow, bareHeatFlow, d.energy);
-  return { kind: 'ok', case: c, result, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, energy };
+  const figures = energy ? annualEnergy(heatFlow, bareHeatFlow, energy) : null;
+  return { kind: 'ok', case: c, result, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, energy: figures };
 }

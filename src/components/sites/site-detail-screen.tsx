@@ -15,6 +15,7 @@ import { Banner, Button, Card, EmptyState, Screen, Text, TextLink } from '../ui'
 
 import { BASES, displayValue, type BasisSpec, type EditScope } from './design-basis-fields';
 import { SiteEditForm } from './site-edit-form';
+import { SiteSectionLinks } from './site-section-nav';
 
 function BasisCard({ spec, site, system, onEdit }: { spec: BasisSpec; site: SiteDetail; system: UnitSystem; onEdit?: () => void }) {
   const basis = site.designBases?.[spec.key] as Record<string, unknown> | undefined;
@@ -135,6 +136,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
               {can(role, 'site.delete') ? <DeleteSite site={s} /> : null}
             </View>
           ) : null}
+          <SiteSectionLinks siteId={s.id} />
           {!s.description ? (
             scope === 'all' ? (
               <EmptyState

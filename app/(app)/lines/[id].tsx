@@ -1,0 +1,13 @@
+import { Stack, useLocalSearchParams } from 'expo-router';
+
+import { ItemScreen } from '../../../src/components/lines';
+
+export default function LineRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <>
+      <Stack.Screen options={{ title: 'Line · Lagline' }} />
+      <ItemScreen id={typeof id === 'string' ? id : ''} kind="line" />
+    </>
+  );
+}

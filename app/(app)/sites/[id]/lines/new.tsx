@@ -1,0 +1,13 @@
+import { Stack, useLocalSearchParams } from 'expo-router';
+
+import { NewItemScreen } from '../../../../../src/components/lines';
+
+export default function NewLineRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return (
+    <>
+      <Stack.Screen options={{ title: 'Add a line · Lagline' }} />
+      <NewItemScreen siteId={typeof id === 'string' ? id : ''} kind="line" />
+    </>
+  );
+}
