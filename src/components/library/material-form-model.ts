@@ -9,6 +9,7 @@ import { teamMaterialCreateSchema, teamMaterialPatchSchema } from '../../../shar
 import type { TeamMaterial } from '../../api/types';
 import { formatInputNumber, fromDisplay, parseNumber, toDisplay, type UnitSystem } from '../../calc/units';
 import { validateWithSchema } from '../forms/validate';
+import { clean } from '../lines/build-up';
 
 export const MAX_POINTS = 40;
 
@@ -77,8 +78,8 @@ function parse(values: MaterialFormValues, system: UnitSystem, start?: { values:
     const was = start?.values.points[i];
     const stored = start?.material.tablePoints[i];
     points.push({
-      meanTemperatureC: was && stored && was.t === p.t ? stored.meanTemperatureC : fromDisplay('temperature', system, tn),
-      conductivityWPerMK: was && stored && was.k === p.k ? stored.conductivityWPerMK : fromDisplay('conductivity', system, kn),
+      meanTemperatureC: was && stored && was.t === p.t ? stored.meanTemperatureC : clean(fromDisplay('temperature', system, tn)),
+      conductivityWPerMK: was && stored && was.k === p.k ? stored.conductivityWPerMK : clean(fromDisplay('conductivity', system, kn)),
     });
   });
   const temp = (field: 'minService' | 'maxService', label: string, stored?: number): number | null => {
@@ -90,7 +91,7 @@ function parse(values: MaterialFormValues, system: UnitSystem, start?: { values:
       errors[field] = `${label} must be a number`;
       return null;
     }
-    return fromDisplay('temperature', system, n);
+    return clean(fromDisplay('temperature', system, n));
   };
   return {
     points,

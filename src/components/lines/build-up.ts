@@ -17,6 +17,9 @@ export interface BuildUpDraft {
 
 export const MAX_LAYERS = 6;
 
+/** A converted number without the float noise of the conversion (0.0381, not 0.038099999999999995). */
+export const clean = (x: number) => Number(x.toPrecision(12));
+
 /** Field names of build-up errors, as the form shows them. */
 export const buildUpField = {
   layers: 'buildUp.layers',
@@ -68,7 +71,7 @@ export function draftToBuildUp(
       return { materialId: l.materialId };
     }
     const same = shownBefore?.layers[i]?.thickness === l.thickness && initial?.layers[i]?.thicknessM !== undefined;
-    return { materialId: l.materialId, thicknessM: same ? (initial!.layers[i].thicknessM as number) : fromDisplay('thickness', system, n) };
+    return { materialId: l.materialId, thicknessM: same ? (initial!.layers[i].thicknessM as number) : clean(fromDisplay('thickness', system, n)) };
   });
   if (!d.finishId) errors[buildUpField.finish] = 'Choose an outer finish';
   const buildUp: BuildUp = { layers, finishId: d.finishId, ...(d.fixed ? { fixed: true } : {}) };

@@ -9,7 +9,7 @@ import { formatInputNumber, fromDisplay, parseNumber, toDisplay, type Quantity, 
 import type { BuildUp, ItemKind, Line, Purpose, Vessel } from '../../api/types';
 import { validateWithSchema } from '../forms/validate';
 
-import { buildUpToDraft, draftToBuildUp, type BuildUpDraft } from './build-up';
+import { buildUpToDraft, clean, draftToBuildUp, type BuildUpDraft } from './build-up';
 
 export interface ItemFormValues {
   tag: string;
@@ -218,7 +218,7 @@ export function formToItemInput(values: ItemFormValues, kind: ItemKind, system: 
       errors[field] = `${NUMBER_FIELDS[field].label} must be a number`;
       return undefined;
     }
-    return fromDisplay(quantityOf(field, kind), system, n);
+    return clean(fromDisplay(quantityOf(field, kind), system, n));
   };
   const body: Record<string, unknown> = { tag: values.tag.trim() };
   if (values.service.trim() || start) body.service = values.service.trim();
