@@ -8,6 +8,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 
+import { itemInsertRow } from '../../server/lines/items.repository';
+
 import {
   assertNoCspViolations,
   assertNoPageErrors,
@@ -173,5 +175,56 @@ describe.each([
     assertNoCspViolations(page);
     assertNoPageErrors(page);
     assertOnlyLoopback(opened.requests);
+  });
+
+  it('when a site holds 10,000 lines, then the page keeps only a window of rows and scrolling pages through to the last', async () => {
+    const { page } = opened;
+    const team = (await server.db('teams').first('id')) as { id: number };
+    const [siteId] = await server.db('sites').insert({ team_id: team.id, name: `Big plant ${tag}`, description: '', design_bases: JSON.stringify({}) });
+    const rows = Array.from({ length: 10_000 }, (_, i) =>
+      itemInsertRow(team.id, siteId, 'line', null, {
+        tag: `BIG-${String(i).padStart(5, '0')}`,
+        service: i % 2 ? 'Steam' : 'Condensate',
+        sizeKind: 'nps',
+        nps: '2',
+        dn: 50,
+        outerDiameterM: 0.0603,
+        lengthM: 10 + (i % 90),
+        orientation: 'horizontal',
+        heightM: null,
+        headType: null,
+        location: i % 3 ? 'outdoor' : 'indoor',
+        operatingTemperatureC: 120 + (i % 60),
+        purposes: ['personnelProtection'],
+        purposeParameters: {},
+        fittings: { valves: 0, flanges: 0, elbows: 0, tees: 0 },
+        fittingsInsulated: true,
+        buildUp: null,
+        notes: '',
+        inputHash: 'unsized',
+      }),
+    );
+    for (let i = 0; i < rows.length; i += 1000) await server.db('items').insert(rows.slice(i, i + 1000));
+
+    await gotoApp(page, `${server.url}/sites/${siteId}/lines`);
+    await page.getByTestId('row-BIG-00000').waitFor();
+    await expect(page.getByTestId('list-count').innerText()).resolves.toBe('500+ lines');
+    const list = page.getByTestId('item-list');
+    const rendered = () => page.getByTestId(/^row-BIG-/).count();
+    let most = await rendered();
+    for (let i = 0; i < 60 && (await page.getByTestId('row-BIG-09999').count()) === 0; i++) {
+      await list.evaluate((el) => {
+        el.scrollTop = el.scrollHeight;
+      });
+      await page.waitForTimeout(150);
+      most = Math.max(most, await rendered());
+    }
+    await page.getByTestId('row-BIG-09999').waitFor();
+    await expect(page.getByTestId('list-count').innerText()).resolves.toBe('10,000 lines');
+    // Virtualised: never more than a few screens of rows in the page, however long the list.
+    expect(most).toBeLessThan(300);
+    await expect(page.getByTestId('state-BIG-09999').innerText()).resolves.toBe('Not sized');
+    await screenshot(page, `line-list-${tag}-12-ten-thousand`);
+    assertNoPageErrors(page);
   });
 });

@@ -103,10 +103,10 @@ function ItemFormBody({
   const err = (name: string) => (shown ? errors[name] : undefined);
   const set = <K extends keyof ItemFormValues>(name: K, value: ItemFormValues[K]) => void form.setFieldValue(name, value);
 
-  const numberField = (name: NumberFieldName, opts: { label?: string; hint?: string } = {}) => {
+  const numberField = (name: NumberFieldName, opts: { label?: string; hint?: string; narrow?: boolean } = {}) => {
     const unit = unitOf(quantityOf(name, kind), system);
     return (
-      <View style={styles.field}>
+      <View style={opts.narrow ? styles.narrowField : styles.field}>
         <FormTextField
           form={form}
           name={name}
@@ -259,10 +259,10 @@ function ItemFormBody({
       {kind === 'line' ? (
         <Card title="Fittings" subtitle="Valves and flanges count as an equivalent length of pipe in the heat loss.">
           <View style={styles.fields}>
-            {numberField('valves')}
-            {numberField('flanges')}
-            {numberField('elbows')}
-            {numberField('tees')}
+            {numberField('valves', { narrow: true })}
+            {numberField('flanges', { narrow: true })}
+            {numberField('elbows', { narrow: true })}
+            {numberField('tees', { narrow: true })}
           </View>
           <Checkbox
             label="Valves and flanges carry insulating covers"
@@ -307,5 +307,6 @@ const styles = StyleSheet.create({
   form: { gap: spacing.lg },
   fields: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
   field: { flexGrow: 1, flexBasis: 220 },
+  narrowField: { flexGrow: 1, flexBasis: 120 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });

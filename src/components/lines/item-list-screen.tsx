@@ -110,7 +110,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
   const newHref = `/sites/${encodeURIComponent(siteId)}/${kind === 'line' ? 'lines' : 'vessels'}/new`;
 
   const filterPanel = (
-    <View style={styles.filters} testID="list-filters">
+    <View style={[styles.filters, wide && styles.filtersWide]} testID="list-filters">
       <View style={styles.filterItem}>
         <SelectField
           label="Purpose"
@@ -167,8 +167,9 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
   const head = (
     <View style={[styles.head, { paddingTop: insets.top + spacing.lg }]}>
       <SiteSectionTabs siteId={siteId} siteName={site.data?.name} current={kind === 'line' ? 'lines' : 'vessels'} />
-      <PageTitle title={`${words.Many}${site.data ? ` · ${site.data.name}` : ''}`} />
-      <View style={styles.actions}>
+      <View style={wide ? styles.titleRow : styles.column}>
+        <PageTitle title={`${words.Many}${site.data ? ` · ${site.data.name}` : ''}`} />
+        <View style={styles.actions}>
         <View role="group" aria-label="Show" style={styles.segments}>
           {(['line', 'vessel'] as const).map((k) => (
             <Link key={k} href={`/sites/${encodeURIComponent(siteId)}/${k === 'line' ? 'lines' : 'vessels'}`} asChild>
@@ -182,6 +183,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
         </View>
         {canEdit ? <Button label={wide ? `Add a ${words.one}` : 'Add'} aria-label={`Add a ${words.one}`} icon="plus" variant="secondary" onPress={() => router.push(newHref)} testID="add-item" /> : null}
         <SizeAll siteId={siteId} compact />
+        </View>
       </View>
       <SizingStatus siteId={siteId} />
       {notice ? (
@@ -191,7 +193,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
         </Banner>
       ) : null}
       <View style={styles.searchRow}>
-        <View style={styles.search}>
+        <View style={[styles.search, wide && styles.searchWide]}>
           <TextField label="Search tags and services" value={search} onChangeText={onSearch} testID="list-search" autoCapitalize="none" />
         </View>
         {!wide ? (
@@ -203,8 +205,9 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
             testID="toggle-filters"
           />
         ) : null}
+        {wide ? filterPanel : null}
       </View>
-      {wide || showFilters ? filterPanel : null}
+      {!wide && showFilters ? filterPanel : null}
       <View style={styles.countRow}>
         <Text variant="caption" tone="textMuted" testID="list-count">
           {list.isPending ? 'Loading…' : `${items.length.toLocaleString('en-US')}${list.hasNextPage ? '+' : ''} ${items.length === 1 ? words.one : words.many}${filtered ? ' match' : ''}`}
@@ -317,9 +320,13 @@ const styles = StyleSheet.create({
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'flex-start' },
   searchRow: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'flex-end' },
   search: { flexGrow: 1, flexBasis: 180 },
+  searchWide: { flexGrow: 0, flexBasis: 260 },
+  titleRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
+  column: { gap: spacing.md },
   filters: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md, alignItems: 'flex-start' },
+  filtersWide: { flexGrow: 1, flexBasis: 600, flexWrap: 'nowrap' },
   filterRow: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md, alignItems: 'flex-end' },
-  filterItem: { minWidth: 220, flexGrow: 1, flexBasis: 220 },
+  filterItem: { minWidth: 200, flexGrow: 1, flexBasis: 200 },
   countRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md, minHeight: 32 },
   selectionBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
   listWrap: { flex: 1, marginHorizontal: spacing.lg, borderTopWidth: 1, borderTopColor: colors.border },

@@ -18,8 +18,8 @@ export type Column = { key: keyof RowCells; label: string; sort?: ListSortKey; f
 
 export function columnsFor(kind: ItemKind): Column[] {
   return [
-    { key: 'tag', label: 'Tag', sort: 'tag', flex: 1.5 },
-    { key: 'service', label: 'Service', sort: 'service', flex: 1.5 },
+    { key: 'tag', label: 'Tag', sort: 'tag', flex: 1.4 },
+    { key: 'service', label: 'Service', sort: 'service', flex: 1.4 },
     { key: 'size', label: kind === 'line' ? 'Size' : 'Diameter', sort: 'outerDiameterM', flex: 0.9 },
     { key: 'length', label: 'Length', sort: 'lengthM', flex: 0.8, numeric: true },
     { key: 'temperature', label: 'Operating', sort: 'operatingTemperatureC', flex: 0.8, numeric: true },
@@ -28,7 +28,7 @@ export function columnsFor(kind: ItemKind): Column[] {
     { key: 'thickness', label: 'Thickness', sort: 'totalThicknessM', flex: 1, numeric: true },
     { key: 'heatLoss', label: kind === 'line' ? 'Heat loss per length' : 'Heat loss', sort: 'heatLoss', flex: 1, numeric: true },
     { key: 'surface', label: 'Surface', sort: 'surfaceTemperatureC', flex: 0.8, numeric: true },
-    { key: 'status', label: 'State (by sizing date)', sort: 'sizedAt', flex: 1.3 },
+    { key: 'status', label: 'State (by sizing date)', sort: 'sizedAt', flex: 1.5 },
   ];
 }
 
@@ -39,7 +39,7 @@ export function StatusMark({ status, testID }: { status: RowStatus; testID?: str
   return (
     <View style={styles.status} testID={testID} {...({ dataSet: { state: status.state } } as object)}>
       <Icon name={status.icon} tone={status.tone} size={18} />
-      <Text variant="caption" weight="semibold" tone={status.tone === 'textMuted' ? 'textMuted' : status.tone} numberOfLines={1}>
+      <Text variant="caption" weight="semibold" tone={status.tone} numberOfLines={1} style={styles.statusWord}>
         {status.word}
       </Text>
       {status.detail ? (
@@ -130,7 +130,7 @@ export const ItemCard = memo(function ItemCard({ item, kind, system, selectable,
             </View>
             {cells.status.detail ? (
               <Text variant="caption" tone="fail" numberOfLines={1}>
-                {cells.status.detail}
+                {cells.status.state === 'failing' ? `Fails ${cells.status.detail}` : `Stale; ${cells.status.detail}`}
               </Text>
             ) : null}
           </Pressable>
@@ -192,6 +192,7 @@ const styles = StyleSheet.create({
   cell: { paddingHorizontal: spacing.sm, minWidth: 0, justifyContent: 'center' },
   numeric: { alignItems: 'flex-end' },
   status: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs, minWidth: 0 },
+  statusWord: { flexShrink: 0 },
   statusDetail: { flexShrink: 1 },
   cardSlot: { height: CARD_HEIGHT, paddingBottom: spacing.sm },
   card: {

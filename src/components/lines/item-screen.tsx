@@ -306,22 +306,28 @@ export function ItemScreen({ id, kind }: { id: string; kind: ItemKind }) {
             <SizeAll siteId={it.siteId} compact={status.state !== 'unsized' && status.state !== 'stale'} />
             {canEdit ? <DeleteItem item={it} kind={kind} /> : null}
           </View>
-          <View style={large ? styles.sideBySide : styles.column}>
-            <View style={large ? styles.inputsWide : styles.column}>
-              <Card title="Inputs" testID="item-inputs">
-                <Facts rows={inputRows(it, kind, system, library.data)} />
-              </Card>
-            </View>
-            <View style={large ? styles.resultsWide : styles.column}>
-              {result && it.sizing ? (
-                <ResultsPanel item={it} kind={kind} result={result} site={site.data} system={system} lib={library.data} />
-              ) : !storedError ? (
-                <Card title="Results">
-                  <Text tone="textMuted">{`No results yet: size the site and this ${words.one}’s thickness, heat loss and surface temperature appear here.`}</Text>
+          {(() => {
+            const inputs = (
+              <View key="inputs" style={large ? styles.inputsWide : styles.column}>
+                <Card title="Inputs" testID="item-inputs">
+                  <Facts rows={inputRows(it, kind, system, library.data)} />
                 </Card>
-              ) : null}
-            </View>
-          </View>
+              </View>
+            );
+            const results = (
+              <View key="results" style={large ? styles.resultsWide : styles.column}>
+                {result && it.sizing ? (
+                  <ResultsPanel item={it} kind={kind} result={result} site={site.data} system={system} lib={library.data} />
+                ) : !storedError ? (
+                  <Card title="Results">
+                    <Text tone="textMuted">{`No results yet: size the site and this ${words.one}’s thickness, heat loss and surface temperature appear here.`}</Text>
+                  </Card>
+                ) : null}
+              </View>
+            );
+            // Results first on a phone (what the page is for); inputs beside them on a large screen.
+            return <View style={large ? styles.sideBySide : styles.column}>{large ? [inputs, results] : [results, inputs]}</View>;
+          })()}
           {analysis?.kind === 'error' ? (
             <Banner tone="fail" title="Cannot chart these inputs">
               {analysis.message}

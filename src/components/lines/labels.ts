@@ -38,7 +38,7 @@ export const KIND_WORDS: Record<ItemKind, { one: string; many: string; One: stri
 };
 
 export const STATUS_FILTERS: { value: ListStatus; label: string }[] = [
-  { value: 'failing', label: 'Failing a purpose' },
+  { value: 'failing', label: 'Failing' },
   { value: 'stale', label: 'Stale' },
   { value: 'unsized', label: 'Not sized' },
   { value: 'current', label: 'Up to date' },

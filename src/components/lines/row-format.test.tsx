@@ -97,8 +97,8 @@ describe('list row formatting', () => {
 
   it('when an item is unsized, stale or failing, then the state is a word and an icon, stale first', () => {
     expect(rowStatus(line({ sizing: null }))).toMatchObject({ state: 'unsized', word: 'Not sized', icon: 'info' });
-    expect(rowStatus(line({ sizing: sizing({ stale: true, failing: ['heatConservation'] }) }))).toMatchObject({ state: 'stale', word: 'Stale', icon: 'caution', detail: 'Fails conservation' });
-    expect(rowStatus(line({ sizing: sizing({ failing: ['personnelProtection', 'heatConservation'] }) }))).toMatchObject({ state: 'failing', word: 'Fails', icon: 'fail', detail: 'Fails personnel, conservation' });
+    expect(rowStatus(line({ sizing: sizing({ stale: true, failing: ['heatConservation'] }) }))).toMatchObject({ state: 'stale', word: 'Stale', icon: 'caution', detail: 'fails conservation' });
+    expect(rowStatus(line({ sizing: sizing({ failing: ['personnelProtection', 'heatConservation'] }) }))).toMatchObject({ state: 'failing', word: 'Fails', icon: 'fail', detail: 'personnel, conservation' });
     expect(formatRow(line({ sizing: null }), 'line', 'SI')).toMatchObject({ thickness: '—', heatLoss: '—', surface: '—' });
   });
 

@@ -49,8 +49,8 @@ export function listTemperature(celsius: number | null | undefined, system: Unit
 export function rowStatus(item: Pick<Item, 'sizing' | 'purposes'>): RowStatus {
   const s = item.sizing;
   if (!s) return { state: 'unsized', word: 'Not sized', icon: 'info', tone: 'textMuted' };
-  const failing = s.failing.length > 0 ? `Fails ${s.failing.map((p) => PURPOSE_LABELS[p].short.toLowerCase()).join(', ')}` : undefined;
-  if (s.stale) return { state: 'stale', word: 'Stale', icon: 'caution', tone: 'caution', detail: failing };
+  const failing = s.failing.length > 0 ? s.failing.map((p) => PURPOSE_LABELS[p].short.toLowerCase()).join(', ') : undefined;
+  if (s.stale) return { state: 'stale', word: 'Stale', icon: 'caution', tone: 'caution', detail: failing ? `fails ${failing}` : undefined };
   if (failing) return { state: 'failing', word: 'Fails', icon: 'fail', tone: 'fail', detail: failing };
   return { state: 'current', word: 'Sized', icon: 'pass', tone: 'pass' };
 }
