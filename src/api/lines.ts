@@ -1,4 +1,4 @@
-import { useInfiniteQuery, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { keepPreviousData, useInfiniteQuery, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 
 import type { BulkEditInput, SizingSettingsInput } from '../../shared/schemas/lines';
 
@@ -74,6 +74,8 @@ export function useItemList<K extends ItemKind>(siteId: number | string, kind: K
     },
     initialPageParam: null as string | null,
     getNextPageParam: (last) => last.nextCursor ?? undefined,
+    // A new search, filter or sort keeps the rows shown until its own arrive (no flash, focus stays put).
+    placeholderData: keepPreviousData,
     staleTime: lineStaleTimes.list,
     retry: shouldRetry,
     enabled: String(siteId) !== '',

@@ -155,6 +155,20 @@ describe.each([
   it('when the overview, library and sizing settings are opened, then they show the site’s totals, the library with its sources and the settings', async () => {
     const { page } = opened;
     const site = (await server.db('sites').where({ name: 'Boiler house' }).first('id')) as { id: number };
+    if (!phone) {
+      // Sorting by keyboard: Enter on a column head sorts by it, Enter again reverses; the server sorts.
+      await gotoApp(page, `${server.url}/sites/${site.id}/lines`);
+      await page.getByTestId('item-list').getByTestId(/^row-/).first().waitFor();
+      const head = page.getByTestId('sort-lengthM');
+      await head.focus();
+      await page.keyboard.press('Enter');
+      await page.getByRole('columnheader', { name: /^Length, sorted ascending/ }).waitFor();
+      await page.keyboard.press('Enter');
+      await page.getByRole('columnheader', { name: /^Length, sorted descending/ }).waitFor();
+      const longest = (await server.db('items').where({ site_id: site.id, kind: 'line' }).orderBy([{ column: 'length_m', order: 'desc' }, { column: 'id', order: 'desc' }]).first('tag')) as { tag: string };
+      await expect(page.getByTestId('item-list').getByTestId(/^row-/).first().getAttribute('data-testid')).resolves.toBe(`row-${longest.tag}`);
+      await screenshot(page, `line-list-${tag}-09a-sorted`);
+    }
     await gotoApp(page, `${server.url}/sites/${site.id}/overview`);
     await page.getByTestId('overview-totals').waitFor();
     await expect(page.getByTestId('overview-heatLoss').innerText()).resolves.toMatch(/^[\d,.]+$/);

@@ -24,6 +24,15 @@ export function Checkbox({ label, checked, onChange, labelHidden, description, d
       aria-disabled={disabled || undefined}
       disabled={disabled}
       onPress={() => onChange(!checked)}
+      // Space toggles a checkbox on the web as in a native one (the press handler answers Enter only).
+      {...({
+        onKeyDown: (e: { key: string; preventDefault: () => void }) => {
+          if (e.key === ' ' && !disabled) {
+            e.preventDefault();
+            onChange(!checked);
+          }
+        },
+      } as object)}
       testID={testID}
       style={(state) => [styles.row, labelHidden && styles.bare, (state as { focused?: boolean }).focused && focusRing, disabled && styles.disabled]}
     >

@@ -210,7 +210,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
       {!wide && showFilters ? filterPanel : null}
       <View style={styles.countRow}>
         <Text variant="caption" tone="textMuted" testID="list-count">
-          {list.isPending ? 'Loading…' : `${items.length.toLocaleString('en-US')}${list.hasNextPage ? '+' : ''} ${items.length === 1 ? words.one : words.many}${filtered ? ' match' : ''}`}
+          {list.isPending ? 'Loading…' : list.isPlaceholderData ? 'Updating…' : `${items.length.toLocaleString('en-US')}${list.hasNextPage ? '+' : ''} ${items.length === 1 ? words.one : words.many}${filtered ? ' match' : ''}`}
         </Text>
         {filtered ? <Button label="Clear filters" variant="quiet" onPress={clearFilters} testID="clear-filters" /> : null}
         {canEdit && selected.size > 0 ? (
@@ -281,7 +281,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
           onEndReachedThreshold={3}
           ListEmptyComponent={<View style={styles.emptyWrap}>{empty}</View>}
           ListFooterComponent={list.isFetchingNextPage ? <Loading label="Loading more…" /> : null}
-          style={styles.list}
+          style={[styles.list, list.isPlaceholderData && styles.updating]}
           contentContainerStyle={[!wide && styles.cards, { paddingBottom: insets.bottom + spacing.xl }]}
           testID="item-list"
         />
@@ -331,6 +331,7 @@ const styles = StyleSheet.create({
   selectionBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
   listWrap: { flex: 1, marginHorizontal: spacing.lg, borderTopWidth: 1, borderTopColor: colors.border },
   list: { flex: 1 },
+  updating: { opacity: 0.6 },
   cards: { paddingTop: spacing.sm },
   emptyWrap: { paddingVertical: spacing.lg },
   scrim: { flex: 1, backgroundColor: 'rgba(30, 42, 51, 0.45)', alignItems: 'center', justifyContent: 'center', padding: spacing.md },

@@ -170,7 +170,6 @@ export function TableHeader({ columns, sort, descending, onSort, selectable, all
             onPress={() => c.sort && onSort(c.sort)}
             style={[styles.cell, styles.headCell, { flex: c.flex }, c.numeric && styles.numeric]}
             testID={`sort-${c.sort ?? c.key}`}
-            {...({ tabIndex: 0 } as object)}
           >
             <Text variant="caption" weight={active ? 'bold' : 'semibold'} tone={active ? 'text' : 'textMuted'} numberOfLines={2}>
               {`${c.label}${dir ? (descending ? ' ↓' : ' ↑') : ''}`}
