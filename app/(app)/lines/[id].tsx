@@ -1,13 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { ItemScreen } from '../../../src/components/lines';
 
 export default function LineRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return (
-    <>
-      <Stack.Screen options={{ title: 'Line · Lagline' }} />
-      <ItemScreen id={typeof id === 'string' ? id : ''} kind="line" />
-    </>
-  );
+  return <ItemScreen id={typeof id === 'string' ? id : ''} kind="line" />;
 }

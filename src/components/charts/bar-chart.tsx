@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { G, Line, Rect, Text as SvgText } from 'react-native-svg';
 
+import { fixed } from '../../calc/format';
 import { colors, fonts, spacing } from '../../theme';
 import { Text } from '../ui';
 
@@ -35,7 +36,9 @@ export function BarChart({ title, xLabel, bars, summary, color = colors.heatLine
   const dom = niceDomain(0, max > 0 ? max : 1, width < 420 ? 3 : 5);
   const plotW = Math.max(10, width - labelW - PAD.right);
   const sx = linearScale(0, dom.max, labelW, labelW + plotW);
-  const fx = tickFormatter(dom.ticks);
+  const tf = tickFormatter(dom.ticks);
+  // Whole thousands read with separators (12,000), as every other figure of the app.
+  const fx = (v: number) => (Number.isInteger(v) && Math.abs(v) >= 1000 ? fixed(v, 0) : tf(v));
   const plotH = bars.length * ROW;
 
   return (

@@ -3,6 +3,7 @@ import { sizeItem } from '../../../shared/calc/sizing/size-item';
 import type { DesignBases, LibraryPayload, Line, Vessel } from '../../api/types';
 
 import { analyseItem, contextOf, taskOfItem } from './item-analysis';
+import { purposeNote, purposeTargets } from './purpose-target';
 
 const bases: DesignBases = {
   touch: { airTemperatureC: 40, windSpeedMS: 0, surfaceEmissivity: 0.9, contactSeconds: 5 },
@@ -86,5 +87,26 @@ describe('item page charts from the sizing plan', () => {
   it('when the build-up names a material the library lacks, then the error names the field', () => {
     const bad = line({ buildUp: { layers: [{ materialId: 'team-material-99' }], finishId: 'aluminium-oxidised' } });
     expect(analyseItem(taskOfItem(bad, 'line'), ctx)).toEqual({ kind: 'error', field: 'buildUp.layers[0].materialId', message: 'There is no material "team-material-99" in the library.' });
+  });
+
+  it('when the targets are worded, then their numbers are in the user’s units', () => {
+    const hot = analyseItem(taskOfItem(line({ purposeParameters: { heatConservation: { maxHeatLossWPerM: 50 } } }), 'line'), ctx);
+    const cold = analyseItem(taskOfItem(line({ operatingTemperatureC: 6, purposes: ['condensationControl', 'heatConservation'] }), 'line'), ctx);
+    if (hot.kind !== 'ok' || cold.kind !== 'ok') throw new Error('expected plans');
+    const si = purposeTargets(hot.plan, ctx.bases, 'SI');
+    expect(si.personnelProtection).toMatch(/^surface at most \d+\.\d °C$/);
+    expect(si.heatConservation).toBe('heat flow at most 50.0 W/m');
+    const us = purposeTargets(hot.plan, ctx.bases, 'US');
+    // 50 W/m = 52.0 Btu/(h·ft)
+    expect(us.heatConservation).toBe('heat flow at most 52.0 Btu/(h·ft)');
+    expect(us.personnelProtection).toMatch(/^surface at most \d+\.\d °F$/);
+    const coldUs = purposeTargets(cold.plan, ctx.bases, 'US');
+    // Margin 1 K = 1.8 °F; dew point of 28 °C air at 70 % (Magnus, Alduchov & Eskridge) = 22.0 °C = 71.6 °F
+    expect(coldUs.condensationControl).toBe('surface at least 1.8 °F above the dew point (71.6 °F)');
+    expect(coldUs.heatConservation).toBe('heat flow at most 10 % of the bare item’s');
+  });
+
+  it('when a fixed build-up falls short, then the note says so without SI figures', () => {
+    expect(purposeNote({ purpose: 'personnelProtection', basis: 'touch', target: 'surface at most 58 °C', status: 'notMet', message: 'The build-up as given misses: surface at most 58 °C.' })).toBe('The build-up as built misses this target.');
   });
 });

@@ -8,7 +8,8 @@ import { useLibrary } from '../../api/library';
 import { useDeleteItem, useItem, useSizingSettings, useUpdateItem } from '../../api/lines';
 import { useSession } from '../../api/session';
 import { useSite } from '../../api/sites';
-import type { ItemKind, ItemSizing, LibraryPayload, Line, SiteDetail, Vessel } from '../../api/types';
+import type { SizingBases } from '../../../shared/calc/sizing/types';
+import type { ItemKind, ItemSizing, LibraryPayload, Line, Purpose, SiteDetail, Vessel } from '../../api/types';
 import { formatMoney, formatSignificant, formatTemperature, formatThickness, significant } from '../../calc/format';
 import { annualEnergy } from '../../calc/energy';
 import type { UnitSystem } from '../../calc/units';
@@ -32,6 +33,7 @@ import { itemToForm } from './item-form-model';
 import { StatusMark } from './item-rows';
 import { BASIS_LABELS, HEAD_TYPE_LABELS, KIND_WORDS, PURPOSE_LABELS, PURPOSE_STATUS_WORDS } from './labels';
 import { buildUpWords, siteDefaultNote } from './new-item-screen';
+import { purposeNote, purposeTargets } from './purpose-target';
 import { formatRow, rowStatus } from './row-format';
 import { SizeAll, SizingStatus } from './size-all';
 
@@ -85,7 +87,7 @@ function DeleteItem({ item, kind }: { item: AnyItem; kind: ItemKind }) {
   );
 }
 
-function ResultsPanel({ item, kind, result, site, system, lib }: { item: AnyItem; kind: ItemKind; result: ItemSizing; site: SiteDetail | undefined; system: UnitSystem; lib: LibraryPayload | undefined }) {
+function ResultsPanel({ item, kind, result, site, system, lib, targets }: { item: AnyItem; kind: ItemKind; result: ItemSizing; site: SiteDetail | undefined; system: UnitSystem; lib: LibraryPayload | undefined; /** What each purpose asks, in the user's units. */ targets: Partial<Record<Purpose, string>> }) {
   const s = item.sizing!;
   const gain = (s.heatLossW ?? 0) < 0;
   const governing = result.governingPurpose;
@@ -147,10 +149,10 @@ function ResultsPanel({ item, kind, result, site, system, lib }: { item: AnyItem
               <View key={p.purpose} role="row" style={[styles.purposeRow, gov && styles.purposeGoverns]} testID={`item-purpose-${p.purpose}`}>
                 <View style={styles.purposeName}>
                   <Text weight="semibold">{PURPOSE_LABELS[p.purpose].label}</Text>
-                  <Text variant="caption" tone="textMuted">{`${BASIS_LABELS[p.basis]} basis: ${p.target}`}</Text>
-                  {p.message ? (
+                  <Text variant="caption" tone="textMuted">{`${BASIS_LABELS[p.basis]} basis: ${targets[p.purpose] ?? p.target}`}</Text>
+                  {purposeNote(p) ? (
                     <Text variant="caption" tone={failing ? 'fail' : 'textMuted'}>
-                      {p.message}
+                      {purposeNote(p)}
                     </Text>
                   ) : null}
                 </View>
@@ -253,6 +255,8 @@ export function ItemScreen({ id, kind }: { id: string; kind: ItemKind }) {
   const views = analysis?.kind === 'ok' ? analysis.views : [];
   const shownPurpose = chartPurpose ?? result?.governingPurpose ?? views[0]?.purpose ?? null;
   const view = views.find((v) => v.purpose === shownPurpose) ?? views[0];
+  // Targets from the current inputs; a stale result keeps the words it was sized with.
+  const targets = analysis?.kind === 'ok' && status.state !== 'stale' && site.data ? purposeTargets(analysis.plan, site.data.designBases as SizingBases, system) : {};
   const materials = materialOptions(library.data, system);
   const finishes = finishOptions(library.data);
 
@@ -317,7 +321,7 @@ export function ItemScreen({ id, kind }: { id: string; kind: ItemKind }) {
             const results = (
               <View key="results" style={large ? styles.resultsWide : styles.column}>
                 {result && it.sizing ? (
-                  <ResultsPanel item={it} kind={kind} result={result} site={site.data} system={system} lib={library.data} />
+                  <ResultsPanel item={it} kind={kind} result={result} site={site.data} system={system} lib={library.data} targets={targets} />
                 ) : !storedError ? (
                   <Card title="Results">
                     <Text tone="textMuted">{`No results yet: size the site and this ${words.one}’s thickness, heat loss and surface temperature appear here.`}</Text>

@@ -17,7 +17,7 @@ import { ResultValue } from '../quick-sizing/result-value';
 import { SiteSectionTabs } from '../sites/site-section-nav';
 import { Card, EmptyState, Icon, PageTitle, Screen, Text, type IconName } from '../ui';
 
-import { totalCo2, totalEnergy, totalHeatFlow, totalMoney } from './overview-format';
+import { basisCo2Factor, basisPrice, heatFlowValue, totalCo2, totalEnergy, totalHeatFlow, totalMoney } from './overview-format';
 
 /** Services shown in the chart; the rest are summed into one bar. */
 const CHART_SERVICES = 10;
@@ -57,9 +57,9 @@ function Totals({ o, system }: { o: SiteOverview; system: UnitSystem }) {
   const b = o.basis;
   const basis = [
     b.operatingHoursPerYear !== null ? `${b.operatingHoursPerYear.toLocaleString('en-US')} h a year` : 'no operating hours',
-    b.energyPricePerKWh !== null && o.currency ? `${b.energyPricePerKWh} ${o.currency}/kWh` : 'no energy price',
+    b.energyPricePerKWh !== null && o.currency ? basisPrice(b.energyPricePerKWh, o.currency, system) : 'no energy price',
     b.heatSourceEfficiency !== null ? `heat-source efficiency ${significant(b.heatSourceEfficiency * 100)} %` : null,
-    b.co2KgPerKWh !== null ? `CO₂ ${b.co2KgPerKWh} kg/kWh of fuel${b.co2Basis ? ` (${b.co2Basis})` : ''}` : 'no CO₂ factor',
+    b.co2KgPerKWh !== null ? `CO₂ ${basisCo2Factor(b.co2KgPerKWh, system)} of fuel${b.co2Basis ? ` (${b.co2Basis})` : ''}` : 'no CO₂ factor',
   ].filter(Boolean);
   return (
     <Card title="Totals of the sized items" subtitle={`At the energy basis: ${basis.join('; ')}.`} testID="overview-totals">
@@ -94,8 +94,7 @@ function ByService({ o, system }: { o: SiteOverview; system: UnitSystem }) {
   const rows = [...top];
   if (rest.length > 0) rows.push({ service: `${rest.length} other services`, heatLossW: rest.reduce((s, r) => s + r.heatLossW, 0), annualEnergyKWh: 0, items: rest.reduce((s, r) => s + r.items, 0) });
   const unit = totalHeatFlow(1000, system).unit;
-  const toUnit = (w: number) => Number(totalHeatFlow(Math.abs(w), system).value.replace(/,/g, ''));
-  const bars = rows.map((r, i) => ({ id: `${i}`, label: r.service, value: toUnit(r.heatLossW), valueText: totalHeatFlow(Math.abs(r.heatLossW), system).text }));
+  const bars = rows.map((r, i) => ({ id: `${i}`, label: r.service, value: heatFlowValue(Math.abs(r.heatLossW), system), valueText: totalHeatFlow(Math.abs(r.heatLossW), system).text }));
   const summary = rows.map((r) => `${r.service}: ${totalHeatFlow(Math.abs(r.heatLossW), system).text} over ${r.items} items`).join('; ');
   return (
     <Card title="Heat loss by service" subtitle="Sized items at the energy basis, largest first." testID="overview-by-service">

@@ -1,13 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { NewItemScreen } from '../../../../../src/components/lines';
 
 export default function NewLineRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return (
-    <>
-      <Stack.Screen options={{ title: 'Add a line · Lagline' }} />
-      <NewItemScreen siteId={typeof id === 'string' ? id : ''} kind="line" />
-    </>
-  );
+  return <NewItemScreen siteId={typeof id === 'string' ? id : ''} kind="line" />;
 }

@@ -1,13 +1,8 @@
-import { Stack, useLocalSearchParams } from 'expo-router';
+import { useLocalSearchParams } from 'expo-router';
 
 import { ItemListScreen } from '../../../../../src/components/lines';
 
 export default function SiteVesselsRoute() {
   const { id, status } = useLocalSearchParams<{ id: string; status?: string }>();
-  return (
-    <>
-      <Stack.Screen options={{ title: 'Vessels · Lagline' }} />
-      <ItemListScreen siteId={typeof id === 'string' ? id : ''} kind="vessel" initialStatus={typeof status === 'string' ? status : undefined} />
-    </>
-  );
+  return <ItemListScreen siteId={typeof id === 'string' ? id : ''} kind="vessel" initialStatus={typeof status === 'string' ? status : undefined} />;
 }
