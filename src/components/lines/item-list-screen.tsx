@@ -202,6 +202,7 @@ export function ItemListScreen({ siteId, kind, initialStatus }: { siteId: string
             variant="secondary"
             onPress={() => setShowFilters((s) => !s)}
             aria-expanded={showFilters}
+            style={styles.endAligned}
             testID="toggle-filters"
           />
         ) : null}
@@ -320,6 +321,7 @@ const styles = StyleSheet.create({
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'flex-start' },
   searchRow: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, alignItems: 'flex-end' },
   search: { flexGrow: 1, flexBasis: 180 },
+  endAligned: { alignSelf: 'flex-end' },
   searchWide: { flexGrow: 0, flexBasis: 260 },
   titleRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
   column: { gap: spacing.md },
