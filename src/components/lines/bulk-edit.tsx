@@ -52,6 +52,8 @@ export function BulkEdit({ siteId, kind, ids, system, materials, finishes, onDon
       Object.assign(errs, b.errors);
       if (b.buildUp) body.buildUp = b.buildUp;
     }
+    // The schema's own "something to apply" check sits at the root, which field errors leave out.
+    if (!('purposes' in body) && !('buildUp' in body) && choice !== 'own') errs[''] = 'Choose purposes or a build-up to apply.';
     Object.assign(errs, validateWithSchema(bulkEditSchema, body));
     setErrors(errs);
     if (Object.keys(errs).length > 0) return;
