@@ -4,6 +4,7 @@ import type { DesignBases, LibraryPayload, Line, Vessel } from '../../api/types'
 
 import { analyseItem, contextOf, taskOfItem } from './item-analysis';
 import { purposeNote, purposeTargets } from './purpose-target';
+import { testLine } from './test-line';
 
 const bases: DesignBases = {
   touch: { airTemperatureC: 40, windSpeedMS: 0, surfaceEmissivity: 0.9, contactSeconds: 5 },
@@ -13,32 +14,7 @@ const bases: DesignBases = {
 const library: LibraryPayload = { materials: [], finishes: [], teamMaterials: [], teamFinishes: [] };
 const ctx = contextOf(bases, DEFAULT_SIZING_SETTINGS, library);
 
-const line = (patch: Partial<Line>): Line => ({
-  id: 1,
-  siteId: 1,
-  tag: 'L-1',
-  service: '',
-  sizeGivenAs: 'nps',
-  nps: '4',
-  dn: 100,
-  outerDiameterM: 0.1143,
-  orientation: 'horizontal',
-  heightM: null,
-  lengthM: 80,
-  operatingTemperatureC: 250,
-  location: 'outdoor',
-  purposes: ['personnelProtection', 'heatConservation'],
-  purposeParameters: {},
-  fittings: { valves: 1, flanges: 2, elbows: 0, tees: 0 },
-  fittingsInsulated: true,
-  buildUp: null,
-  notes: '',
-  version: 1,
-  createdAt: '',
-  updatedAt: '',
-  sizing: null,
-  ...patch,
-});
+const line = (patch: Partial<Line>) => testLine(patch);
 
 /** The thickness each chart marks must be the thickness the sizing job stores for that purpose. */
 function expectChartsMatchSizing(item: Line | Vessel, kind: 'line' | 'vessel') {

@@ -1,32 +1,20 @@
 import type { Line, Vessel } from '../../api/types';
 
 import { emptyItemForm, formToItemInput, itemToForm, type ItemFormValues } from './item-form-model';
+import { testLine } from './test-line';
 
-const line: Line = {
+const line: Line = testLine({
   id: 7,
-  siteId: 1,
   tag: '4"-HS-101',
   service: 'HP steam',
-  sizeGivenAs: 'nps',
-  nps: '4',
-  dn: 100,
-  outerDiameterM: 0.1143,
-  orientation: 'horizontal',
-  heightM: null,
   lengthM: 120,
   operatingTemperatureC: 192,
-  location: 'outdoor',
-  purposes: ['personnelProtection', 'heatConservation'],
   purposeParameters: { heatConservation: { maxHeatLossWPerM: 55 } },
   fittings: { valves: 2, flanges: 4, elbows: 6, tees: 1 },
-  fittingsInsulated: true,
   buildUp: { layers: [{ materialId: 'calcium-silicate-c533-type-i', thicknessM: 0.03 }, { materialId: 'mineral-fibre-pipe-c547-type-ii' }], finishId: 'aluminium-oxidised' },
   notes: 'Rack 3',
   version: 4,
-  createdAt: '2026-12-01T00:00:00Z',
-  updatedAt: '2026-12-01T00:00:00Z',
-  sizing: null,
-};
+});
 
 const filled = (patch: Partial<ItemFormValues>): ItemFormValues => ({
   ...emptyItemForm('line'),

@@ -4,6 +4,7 @@ import type { ItemSizingSummary, Line, Vessel } from '../../api/types';
 
 import { StatusMark } from './item-rows';
 import { formatRow, listTemperature, rowStatus } from './row-format';
+import { testLine } from './test-line';
 
 const sizing = (patch: Partial<ItemSizingSummary> = {}): ItemSizingSummary => ({
   governingPurpose: 'personnelProtection',
@@ -20,32 +21,21 @@ const sizing = (patch: Partial<ItemSizingSummary> = {}): ItemSizingSummary => ({
   ...patch,
 });
 
-const line = (patch: Partial<Line> = {}): Line => ({
-  id: 1,
-  siteId: 1,
-  tag: '1"-BD-2197',
-  service: 'Blowdown',
-  sizeGivenAs: 'nps',
-  nps: '1',
-  dn: 25,
-  outerDiameterM: 0.0334,
-  orientation: 'horizontal',
-  heightM: null,
-  lengthM: 8.7,
-  operatingTemperatureC: 190.4,
-  location: 'indoor',
-  purposes: ['heatConservation', 'personnelProtection'],
-  purposeParameters: {},
-  fittings: { valves: 0, flanges: 0, elbows: 0, tees: 0 },
-  fittingsInsulated: true,
-  buildUp: null,
-  notes: '',
-  version: 1,
-  createdAt: '2026-12-03T11:27:35.194Z',
-  updatedAt: '2026-12-03T11:27:35.194Z',
-  sizing: sizing(),
-  ...patch,
-});
+const line = (patch: Partial<Line> = {}): Line =>
+  testLine({
+    tag: '1"-BD-2197',
+    service: 'Blowdown',
+    nps: '1',
+    dn: 25,
+    outerDiameterM: 0.0334,
+    lengthM: 8.7,
+    operatingTemperatureC: 190.4,
+    location: 'indoor',
+    purposes: ['heatConservation', 'personnelProtection'],
+    fittings: { valves: 0, flanges: 0, elbows: 0, tees: 0 },
+    sizing: sizing(),
+    ...patch,
+  });
 
 describe('list row formatting', () => {
   it('when a sized line is shown in SI, then temperatures are whole degrees, thickness whole millimetres and heat loss three figures', () => {
