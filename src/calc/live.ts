@@ -9,7 +9,7 @@ import type { CalcCase, CalcResult, Layer } from '../../shared/calc/types';
 
 import { calcErrorInFormWords } from './calc-messages';
 import { annualEnergy, type EnergyFigures } from './energy';
-import { DraftIncomplete, draftToCase, roundingOf, type Draft } from './quick-case';
+import { DraftIncomplete, draftToCase, roundingOf, type Draft, type EnergyAssumptions } from './quick-case';
 import { validateDraft, type FieldErrors } from './validation';
 import type { UnitSystem } from './units';
 
@@ -246,6 +246,27 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
     if (e instanceof DraftIncomplete) return { kind: 'invalid', errors: { [e.field]: 'Enter a number.' } };
     throw e;
   }
+  return evaluateCase(c, roundingOf(d).seriesM, d.energy, {
+    advice: (code) => adviceFor(d, code),
+    words: (error) => calcErrorInFormWords(error, d, system),
+  });
+}
+
+/**
+ * The full output for one case: its result (or, when the target is out of reach, the best build-up within reach
+ * and the shortfall), the bare-surface comparison, the thickness sweeps over the series range, the temperature
+ * profile and the annual figures (none without `energy`). Used for a quick-sizing draft and for the cases of a
+ * line-list item alike.
+ */
+export function evaluateCase(
+  c: CalcCase,
+  seriesM: readonly number[],
+  energy: EnergyAssumptions | null,
+  opts: {
+    advice?: (code: Shortfall['code']) => string[];
+    words?: (error: { code: string; field: string; message: string }) => { field: string | null; message: string };
+  } = {},
+): Exclude<LiveOutput, { kind: 'invalid' }> {
   const outcome = runCase(c);
   let result: CalcResult;
   let evaluated = c;
@@ -254,13 +275,13 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
     const code = outcome.error.code;
     const best = code === 'TARGET_NOT_REACHABLE' || code === 'SERIES_TOO_THIN' ? bestWithinReach(c, code) : null;
     if (!best) {
-      const words = calcErrorInFormWords(outcome.error, d, system);
+      const words = opts.words?.(outcome.error) ?? { field: outcome.error.field, message: outcome.error.message };
       return { kind: 'error', case: c, code, field: outcome.error.field, formField: words.field, message: words.message, advice: [] };
     }
     const sc = code as Shortfall['code'];
     result = best.result;
     evaluated = best.evaluated;
-    shortfall = { code: sc, bestThicknessM: best.bestThicknessM, neededThicknessM: best.neededThicknessM, advice: adviceFor(d, sc) };
+    shortfall = { code: sc, bestThicknessM: best.bestThicknessM, neededThicknessM: best.neededThicknessM, advice: opts.advice?.(sc) ?? [] };
   } else {
     result = outcome;
   }
@@ -273,8 +294,7 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
   }
   const heatFlow = heatFlowOf(c, result);
   const bareHeatFlow = bare ? heatFlowOf(c, bare) : null;
-  const series = roundingOf(d).seriesM;
-  const swept = sweep(c, series);
+  const swept = sweep(c, seriesM);
   const layers = evaluatedLayers(evaluated, result);
   const innerM = c.layers.slice(0, -1).reduce((s, l) => s + l.thicknessM, 0);
   const chosenThicknessM = c.solveFor
@@ -283,12 +303,12 @@ export function evaluateDraft(d: Draft, system: UnitSystem): LiveOutput {
       ? layers[layers.length - 1].thicknessM
       : null;
   const { points, boundaries } = temperatureProfile(evaluated, result);
-  const energy = annualEnergy(heatFlow, bareHeatFlow, d.energy);
+  const figures = energy ? annualEnergy(heatFlow, bareHeatFlow, energy) : null;
   const lastDraft = c.layers.length - 1;
   const buildUp: EvaluatedLayer[] = layers.flatMap((layer, i) => {
     const outerC = result.interfaceTemperaturesC[i];
     if (outerC === undefined) return [];
     return [{ layer, draftIndex: Math.min(i, lastDraft), innerC: i === 0 ? c.processTemperatureC : result.interfaceTemperaturesC[i - 1], outerC }];
   });
-  return { kind: 'ok', case: c, result, shortfall, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, buildUp, energy };
+  return { kind: 'ok', case: c, result, shortfall, bare, heatFlow, bareHeatFlow, sweep: swept, chosenThicknessM, profile: points, boundaries, buildUp, energy: figures };
 }

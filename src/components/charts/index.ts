@@ -1,2 +1,3 @@
 export * from './line-chart';
 export * from './scale';
+export * from './bar-chart';

@@ -21,6 +21,8 @@ export interface LineChartProps {
   marker?: { x: number; y: number; label: string } | null;
   /** Thin vertical guides (layer faces). */
   guides?: { x: number; label?: string }[];
+  /** Data points drawn as small open circles (e.g. the table a curve was fitted to). */
+  dots?: ChartPoint[];
   formatX?: (x: number) => string;
   formatY?: (y: number) => string;
   /** What the chart shows, in words, for screen readers (and shown to nobody else). */
@@ -36,12 +38,16 @@ const TICK_FONT = 11;
  * Our line chart: thin lines on a sunk plot area, the limit dashed in an accent, the chosen point
  * marked with its value, labelled axes with units. It sizes itself to its container.
  */
-export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides, formatX, formatY, summary, height = 220, testID }: LineChartProps) {
+export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides, dots, formatX, formatY, summary, height = 220, testID }: LineChartProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
 
   const xs = series.flatMap((s) => s.points.map((p) => p.x));
   const ys = series.flatMap((s) => s.points.map((p) => p.y));
+  for (const p of dots ?? []) {
+    xs.push(p.x);
+    ys.push(p.y);
+  }
   if (limit) ys.push(limit.y);
   if (marker) {
     xs.push(marker.x);
@@ -101,6 +107,9 @@ export function LineChart({ title, xLabel, yLabel, series, limit, marker, guides
             ) : null}
             {series.map((s) => (
               <Path key={s.id} d={path(s.points)} stroke={s.color ?? colors.text} strokeWidth={1.5} fill="none" strokeLinejoin="round" />
+            ))}
+            {(dots ?? []).filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y)).map((p, i) => (
+              <Circle key={`d${i}`} cx={sx(p.x)} cy={sy(p.y)} r={3.5} fill={colors.surface} stroke={colors.text} strokeWidth={1.5} />
             ))}
             {marker && Number.isFinite(marker.x) && Number.isFinite(marker.y) ? (
               <G>

@@ -17,6 +17,7 @@ import { Banner, Button, Card, EmptyState, Screen, Text, TextLink } from '../ui'
 import { BASES, displayValue, type BasisSpec, type EditScope } from './design-basis-fields';
 import { SiteEditForm } from './site-edit-form';
 import { SitePeoplePanel } from './site-people-panel';
+import { SiteSectionLinks } from './site-section-nav';
 
 function BasisCard({ spec, site, system, onEdit }: { spec: BasisSpec; site: SiteDetail; system: UnitSystem; onEdit?: () => void }) {
   const basis = site.designBases?.[spec.key] as Record<string, unknown> | undefined;
@@ -144,6 +145,7 @@ export function SiteDetailScreen({ id }: { id: string }) {
             </View>
           ) : null}
           {confirmingDelete && can(role, 'site.delete') ? <DeleteSiteConfirm site={s} onKeep={() => setConfirmingDelete(false)} /> : null}
+          <SiteSectionLinks siteId={s.id} />
           {!s.description ? (
             scope === 'all' ? (
               <EmptyState

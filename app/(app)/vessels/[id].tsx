@@ -1,0 +1,8 @@
+import { useLocalSearchParams } from 'expo-router';
+
+import { ItemScreen } from '../../../src/components/lines';
+
+export default function VesselRoute() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  return <ItemScreen id={typeof id === 'string' ? id : ''} kind="vessel" />;
+}
