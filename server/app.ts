@@ -23,6 +23,8 @@ import { registerSizingRoutes } from './sizing/sizing.routes';
 import { createLogger, type Logger } from './logger';
 import type { Mailer } from './mail/mailer';
 import { registerMeRoutes } from './me/me.routes';
+import { registerReportRoutes } from './reports/reports.routes';
+import { registerRevisionRoutes } from './revisions/revisions.routes';
 import { registerSiteRoutes } from './sites/sites.routes';
 import { registerTeamRoutes } from './team/team.routes';
 
@@ -73,6 +75,8 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   registerLibraryRoutes(api, deps);
   registerLineRoutes(api, deps);
   registerSizingRoutes(api, deps);
+  registerRevisionRoutes(api, deps);
+  registerReportRoutes(api, deps);
   registerDevMailRoutes(api, deps);
   registerCalculationRoutes(api, deps);
   app.use(api);
