@@ -24,9 +24,9 @@ export function documentFrame(list: LineList, title: string, du: DisplayUnits, n
     return {
       title,
       site: list.snapshot.site.name,
-      revision: 'Draft (not issued)',
+      revision: 'Draft',
       revisionShort: 'Draft',
-      status: 'Draft',
+      status: 'Not issued',
       date: isoDate(now),
       createdAt: now,
       units,

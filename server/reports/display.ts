@@ -71,7 +71,7 @@ export function displayUnits(system: UnitSystem) {
     co2: (tonnes: number) => withUnit(significant(d('co2Mass', tonnes * 1000)), u('co2Mass')),
     co2Number: (tonnes: number) => sig(d('co2Mass', tonnes * 1000)),
     co2Factor: (kgPerKWh: number) => withUnit(significant(d('co2Factor', kgPerKWh)), u('co2Factor')),
-    price: (perKWh: number, currency: string) => `${significant(d('pricePerEnergy', perKWh), 4)} ${currency}${u('pricePerEnergy')}`,
+    price: (perKWh: number, currency: string) => `${String(sig(d('pricePerEnergy', perKWh), 4))} ${currency}${u('pricePerEnergy')}`,
     money: (amount: number, currency: string) => formatMoney(amount, currency).text,
     speed: (ms: number) => withUnit(fixed(d('speed', ms), 1), u('speed')),
 

@@ -6,7 +6,7 @@ import type { CsvValue } from '../http/csv';
 import type { LineList } from '../revisions/revisions.service';
 import type { ListedItem } from '../revisions/snapshot';
 import { basesBlock, documentFrame, draftNote, methodBlock } from './context';
-import { layerGroups, libraryNames, purposesLong, purposesShort, sizeLabel } from './describe';
+import { layersText, libraryNames, purposesLong, purposesShort, sizeLabel } from './describe';
 import { PURPOSE_NAMES, PURPOSE_SHORT, type DisplayUnits } from './display';
 import type { Block, ReportDocument, TableRow } from './pdf';
 
@@ -48,7 +48,6 @@ export function insulationScheduleDocument(list: LineList, du: DisplayUnits, now
   const items = scheduleOrder(list.items);
   const names = libraryNames(list.snapshot.library);
   const codes = legendCodes(items);
-  const t = du.system === 'SI' ? 'mm' : 'in';
   const blocks: Block[] = [...draftNote(list)];
   const legend: [string, string][] = [
     ...codes.materials.map((id): [string, string] => [codes.material(id), names.material(id)]),
@@ -70,7 +69,7 @@ export function insulationScheduleDocument(list: LineList, du: DisplayUnits, now
           du.temperatureList(x.item.operatingTemperatureC),
           purposesShort(x.item.purposes),
           r?.governingPurpose ? PURPOSE_SHORT[r.governingPurpose] : '',
-          r ? (r.layers.length ? layerGroups(r.layers).map((g) => `${codes.material(g.materialId)} ${g.thicknessesM.map(du.thicknessValue).join(' + ')}`).join(', ') : 'bare') : '',
+          layersText(r, du, codes.material),
           r ? codes.finish(r.finishId) : '',
           r?.surfaceTemperatureC != null ? du.temperature(r.surfaceTemperatureC) : '',
           ...(kind === 'line' ? [r?.heatLossWPerM != null ? du.heatLossPerLength(r.heatLossWPerM) : ''] : []),
@@ -95,7 +94,7 @@ export function insulationScheduleDocument(list: LineList, du: DisplayUnits, now
         { header: 'Temp.', width: 5, align: 'right' },
         { header: 'Purposes', width: 7 },
         { header: 'Gov.', width: 4 },
-        { header: `Layers (${t})`, width: 11 },
+        { header: 'Layers', width: 11 },
         { header: 'Finish', width: 4 },
         { header: 'Surface', width: 6, align: 'right' },
         ...(kind === 'line' ? [{ header: 'Heat loss per length', width: 8, align: 'right' as const }] : []),
@@ -130,7 +129,7 @@ export function insulationScheduleCsv(list: LineList, du: DisplayUnits): { heade
     'Location',
     'Purposes',
     'Governing purpose',
-    `Layers inside out (material thickness ${t})`,
+    'Layers inside out (material, thickness)',
     `Total thickness [${t}]`,
     'Finish',
     `Surface temperature [${du.unit('temperature')}]`,
@@ -154,7 +153,7 @@ export function insulationScheduleCsv(list: LineList, du: DisplayUnits): { heade
       x.item.location,
       purposesLong(x.item.purposes),
       r?.governingPurpose ? PURPOSE_NAMES[r.governingPurpose] : '',
-      r ? (r.layers.length ? layerGroups(r.layers).map((g) => `${names.material(g.materialId)} ${g.thicknessesM.map(du.thicknessValue).join(' + ')}`).join('; ') : 'bare') : '',
+      layersText(r, du, names.material),
       r ? du.thicknessNumber(r.totalThicknessM) : null,
       r ? names.finish(r.finishId) : '',
       r?.surfaceTemperatureC != null ? du.temperatureNumber(r.surfaceTemperatureC) : null,

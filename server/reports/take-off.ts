@@ -13,7 +13,6 @@
 import { headArea } from '../../shared/calc/vessel-heads';
 import type { CsvValue } from '../http/csv';
 import type { LineList } from '../revisions/revisions.service';
-import type { ListedItem } from '../revisions/snapshot';
 import { documentFrame, draftNote, methodBlock } from './context';
 import { libraryNames, sizeLabel } from './describe';
 import type { DisplayUnits } from './display';
