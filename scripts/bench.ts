@@ -4,6 +4,7 @@
  *   calc CLI wall time for 10,000 analyses and 1,000 thickness solves, process start included [s]
  *   API health latency while a 10,000-case batch runs [ms]
  *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
+ *   insulation schedule of 10,000 lines rendered to PDF [s] (target < 20 s)
  * `--json` prints one JSON object of named figures instead of the table.
  */
 import { spawnSync } from 'node:child_process';
@@ -83,7 +84,11 @@ function apiUnderLoad(): Record<string, unknown> {
   return runJsonScript('bench-api.ts', [], { ...process.env, NODE_ENV: 'test' });
 }
 
+const schedulePdf = runJsonScript('bench-reports.ts', ['10000'], process.env);
+
 const figures = {
+  schedulePdf10kS: (schedulePdf.schedulePdf10kS as number | undefined) ?? null,
+  schedulePdf10k: schedulePdf,
   analyse: timeEach('analyse', 5000, 1),
   solve: timeEach('solve', 500, 2),
   cliAnalyse10000: cliWall('analyse', 10_000, 3),
@@ -104,6 +109,8 @@ if (asJson) {
   console.log(`calc CLI 1,000 solves:    ${figures.cliSolve1000.wallSeconds} s wall (target ≤ 2.5 s)`);
   const h = figures.apiHealthDuring10000Batch;
   if (h) console.log(`API: 10,000-case batch ${h.batchSeconds ?? '–'} s; health during it median ${h.healthMedianMs ?? '–'} ms, max ${h.healthMaxMs ?? '–'} ms over ${h.healthSamples ?? 0} requests (target < 200 ms)${h.note ? ' — ' + h.note : ''}`);
+  const r = figures.schedulePdf10k;
+  console.log(`insulation schedule PDF, 10,000 lines: ${figures.schedulePdf10kS ?? '–'} s wall, ${r.schedulePdf10kCpuS ?? '–'} s CPU, ${r.pages ?? '–'} pages (target < 20 s)${r.note ? ' — ' + r.note : ''}`);
   const p = figures.quickSizingPaint;
   if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
 }
