@@ -119,6 +119,9 @@ export function SiteDetailScreen({ id }: { id: string }) {
     <Screen title={s.name} intro={s.description || undefined} testID="site-detail">
       <View style={styles.head}>
         <TextLink href="/sites">All sites</TextLink>
+        <TextLink href={`/sites/${s.id}/revisions`} testID="site-revisions">
+          Revisions and reports
+        </TextLink>
         <Text variant="caption" tone="textMuted">
           {`Created ${formatDate(s.createdAt)}${s.updatedAt && s.updatedAt !== s.createdAt ? ` · changed ${formatDate(s.updatedAt)}` : ''}`}
         </Text>
