@@ -11,23 +11,12 @@ import { renderPdf } from '../server/reports/pdf';
 import { insulationScheduleDocument } from '../server/reports/schedule';
 import type { LineList } from '../server/revisions/revisions.service';
 import type { ListedItem } from '../server/revisions/snapshot';
+import { seededRandom } from './bench-cases';
 
 const COUNT = Number(process.argv[2] ?? 10_000);
 
-/** Deterministic pseudo-random numbers (mulberry32). */
-function random(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function syntheticList(count: number): LineList {
-  const rnd = random(10_000);
+  const rnd = seededRandom(10_000);
   const sizes: [string, number][] = [
     ['1', 0.0334],
     ['2', 0.0603],

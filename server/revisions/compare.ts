@@ -7,38 +7,11 @@
  * never shows a difference in the last binary digit.
  */
 import { canonicalJson } from '../../shared/calc/sizing/hash';
+import type { ComparisonCounts, FieldChange, ItemChange } from '../../shared/schemas/revisions';
 import type { DisplayUnits } from '../reports/display';
 import { buildUpText, layersText, purposesLong, sizeLabel, type LibraryNames } from '../reports/describe';
 import { PURPOSE_NAMES } from '../reports/display';
 import type { ListedItem } from './snapshot';
-
-export type FieldChange = {
-  field: string;
-  label: string;
-  /** Values as stored (SI). */
-  from: unknown;
-  to: unknown;
-  /** Values in the reader's units. */
-  fromText: string;
-  toText: string;
-  /** The insulation thickness changed (layers or total). */
-  thickness: boolean;
-};
-
-export type ItemChange = {
-  key: string;
-  kind: 'line' | 'vessel';
-  tag: string;
-  itemId: number;
-  change: 'added' | 'removed' | 'changed';
-  thicknessChanged: boolean;
-  totalThicknessM: { from: number | null; to: number | null; fromText: string; toText: string };
-  /** One line on the item as it is on the side that has it (added: the new side). */
-  summary: string;
-  fields: FieldChange[];
-};
-
-export type ComparisonCounts = { added: number; removed: number; changed: number; unchanged: number; thicknessChanged: number };
 
 type FieldDef = {
   field: string;

@@ -8,6 +8,7 @@ import crypto from 'node:crypto';
 import type { StoredSizingSettings } from '../../shared/calc/sizing/settings';
 import { canonicalJson } from '../../shared/calc/sizing/hash';
 import type { ItemSizing, SizingBases, SizingLibraryData } from '../../shared/calc/sizing/types';
+import type { RevisionTotals } from '../../shared/schemas/revisions';
 import type { ItemRecord, StoredResult } from '../lines/items.repository';
 
 /** An item's inputs as a revision keeps them (SI; no team, site, version or timestamps). */
@@ -105,17 +106,7 @@ export function snapshotHash(site: SiteSnapshot, items: readonly { item: Snapsho
   return h.digest('hex');
 }
 
-export type RevisionTotals = {
-  lines: number;
-  vessels: number;
-  /** Whole items at the energy basis [W]. */
-  heatLossW: number;
-  bareHeatLossW: number;
-  annualEnergyKWh: number;
-  bareAnnualEnergyKWh: number;
-  /** Items with a purpose they do not meet. */
-  failing: number;
-};
+export type { RevisionTotals };
 
 export function totalsOf(items: readonly ListedItem[]): RevisionTotals {
   const t: RevisionTotals = { lines: 0, vessels: 0, heatLossW: 0, bareHeatLossW: 0, annualEnergyKWh: 0, bareAnnualEnergyKWh: 0, failing: 0 };

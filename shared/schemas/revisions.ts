@@ -21,6 +21,52 @@ export type RevisionStatus = (typeof REVISION_STATUSES)[number];
  */
 export type RevisionScheme = { kind: 'trade' } | { kind: 'counter'; prefix: string; start: number; digits: number };
 
+/** Totals a revision keeps for its history line. */
+export type RevisionTotals = {
+  lines: number;
+  vessels: number;
+  /** Whole items at the energy basis [W]. */
+  heatLossW: number;
+  bareHeatLossW: number;
+  annualEnergyKWh: number;
+  bareAnnualEnergyKWh: number;
+  /** Items with a purpose they do not meet. */
+  failing: number;
+};
+
+/** A signature as the API shows it: who, and when. */
+export type RevisionSignature = { userId: number | null; name: string; at: string };
+
+/** One field of an item that differs between two line lists. */
+export type FieldChange = {
+  field: string;
+  label: string;
+  /** Values as stored (SI). */
+  from: unknown;
+  to: unknown;
+  /** Values in the reader's units. */
+  fromText: string;
+  toText: string;
+  /** The insulation thickness changed (layers or total). */
+  thickness: boolean;
+};
+
+/** An item added, removed or changed between two line lists. */
+export type ItemChange = {
+  key: string;
+  kind: 'line' | 'vessel';
+  tag: string;
+  itemId: number;
+  change: 'added' | 'removed' | 'changed';
+  thicknessChanged: boolean;
+  totalThicknessM: { from: number | null; to: number | null; fromText: string; toText: string };
+  /** One line on the item as it is on the side that has it (added: the new side). */
+  summary: string;
+  fields: FieldChange[];
+};
+
+export type ComparisonCounts = { added: number; removed: number; changed: number; unchanged: number; thicknessChanged: number };
+
 export const DEFAULT_REVISION_SCHEME: RevisionScheme = { kind: 'trade' };
 
 export const REVISION_LIMITS = { descriptionMax: 500, prefixMax: 12, digitsMax: 6, startMax: 999_999, hashLength: 64 } as const;

@@ -1,26 +1,24 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
-import type { RevisionPurpose, RevisionScheme, RevisionStatus } from '../../shared/schemas/revisions';
+import type {
+  ComparisonCounts,
+  FieldChange,
+  ItemChange,
+  RevisionPurpose,
+  RevisionScheme,
+  RevisionSignature,
+  RevisionStatus,
+  RevisionTotals,
+} from '../../shared/schemas/revisions';
 
 import { api, shouldRetry, unwrap } from './client';
 import type { UnitSystem } from './types';
 
-export type { RevisionPurpose, RevisionScheme, RevisionStatus };
+export type { ComparisonCounts, FieldChange, ItemChange, RevisionPurpose, RevisionScheme, RevisionStatus, RevisionTotals };
+export type Signature = RevisionSignature;
 
 /** How long revision data counts as fresh: signatures come from other people, so not long. */
 const revisionStaleTimes = { list: 15_000, detail: 15_000, readiness: 5_000, comparison: 30_000 } as const;
-
-export type Signature = { userId: number | null; name: string; at: string };
-
-export type RevisionTotals = {
-  lines: number;
-  vessels: number;
-  heatLossW: number;
-  bareHeatLossW: number;
-  annualEnergyKWh: number;
-  bareAnnualEnergyKWh: number;
-  failing: number;
-};
 
 export interface Revision {
   id: number;
@@ -59,27 +57,13 @@ export interface Readiness {
   nextNumbers: Record<RevisionPurpose, string>;
 }
 
-export type FieldChange = { field: string; label: string; fromText: string; toText: string; thickness: boolean };
-
-export interface ItemChange {
-  key: string;
-  kind: 'line' | 'vessel';
-  tag: string;
-  itemId: number;
-  change: 'added' | 'removed' | 'changed';
-  thicknessChanged: boolean;
-  totalThicknessM: { from: number | null; to: number | null; fromText: string; toText: string };
-  summary: string;
-  fields: FieldChange[];
-}
-
 export type ComparisonSide = { kind: 'draft' } | { kind: 'revision'; id: number; number: string; status: RevisionStatus; issuedAt: string | null };
 
 export interface Comparison {
   from: ComparisonSide;
   to: ComparisonSide;
   units: UnitSystem;
-  counts: { added: number; removed: number; changed: number; unchanged: number; thicknessChanged: number };
+  counts: ComparisonCounts;
   changes: ItemChange[];
 }
 

@@ -8,6 +8,7 @@ import { insertJob } from '../../server/jobs/jobs.repository';
 import { addSiteMember, insertSite } from '../../server/sites/sites.repository';
 import { ROLES, type Role } from '../../shared/schemas/common';
 import type { Permission } from '../../shared/schemas/permissions';
+import { sizeSiteAndWait } from '../helpers/sizing';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 
 jest.setTimeout(60_000);
@@ -54,8 +55,7 @@ beforeAll(async () => {
   revSiteId = (await owner.post('/api/v1/sites').set('X-CSRF-Token', owner.csrf).send({ name: 'Revision matrix site' }).expect(201)).body.site.id;
   await addSiteMember(ctx.db, revSiteId, users.contractor.userId, ownerId);
   await owner.post(`/api/v1/sites/${revSiteId}/lines`).set('X-CSRF-Token', owner.csrf).send({ ...LINE, tag: 'R-1' }).expect(201);
-  const job = (await owner.post(`/api/v1/sites/${revSiteId}/sizing`).set('X-CSRF-Token', owner.csrf).send({}).expect(202)).body.job;
-  for (let i = 0; i < 600 && (await owner.get(`/api/v1/jobs/${job.id}`)).body.job.status !== 'done'; i++) await new Promise((r) => setTimeout(r, 50));
+  await sizeSiteAndWait(owner, revSiteId);
   const issued = await freshRevision('checked');
   issuedRevisionId = (await owner.post(`/api/v1/revisions/${issued.id}/approve`).set('X-CSRF-Token', owner.csrf).send({ snapshotHash: issued.snapshotHash }).expect(200)).body.revision.id;
 }, 60_000);

@@ -10,6 +10,7 @@ import type { Response } from 'supertest';
 import { displayUnits } from '../../server/reports/display';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner } from '../helpers/api';
 import { pdfText } from '../helpers/pdf-text';
+import { sizeSiteAndWait } from '../helpers/sizing';
 
 jest.setTimeout(180_000);
 
@@ -52,17 +53,6 @@ async function pdf(a: Agent, path: string) {
   return { res, text: await pdfText(res.body as Buffer) };
 }
 
-async function sizeSite(a: Agent, site: number) {
-  const res = await post(a, `/api/v1/sites/${site}/sizing`).expect(202);
-  for (let i = 0; i < 1200; i++) {
-    const job = (await a.get(`/api/v1/jobs/${res.body.job.id}`).expect(200)).body.job;
-    if (job.status === 'done') return;
-    if (job.status === 'failed') throw new Error(job.error);
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error('sizing did not finish');
-}
-
 type Sizing = { heatLossWPerM: number; heatLossW: number; surfaceTemperatureC: number; annualEnergyKWh: number; totalThicknessM: number; governingPurpose: string };
 async function items(a: Agent) {
   const lines = (await a.get(`/api/v1/sites/${siteId}/lines`).expect(200)).body.lines as { tag: string; sizing: Sizing }[];
@@ -103,7 +93,7 @@ beforeAll(async () => {
     purposes: ['personnelProtection'],
     buildUp: { layers: [{ materialId: BOARD, thicknessM: 0.08 }], finishId: 'aluminium-oxidised', fixed: true },
   }).expect(201);
-  await sizeSite(preparer, siteId);
+  await sizeSiteAndWait(preparer, siteId);
   const prepared = (await post(preparer, `/api/v1/sites/${siteId}/revisions`, { purpose: 'review', description: 'Schedule for the boiler-house tender' }).expect(201)).body.revision;
   await post(checker, `/api/v1/revisions/${prepared.id}/check`, { snapshotHash: prepared.snapshotHash }).expect(200);
   revA = (await post(owner, `/api/v1/revisions/${prepared.id}/approve`, { snapshotHash: prepared.snapshotHash }).expect(200)).body.revision;
@@ -300,7 +290,7 @@ describe('every report', () => {
     for (let i = 1; i <= 90; i++) {
       await post(owner, `/api/v1/sites/${big}/lines`, { tag: `L-${String(i).padStart(3, '0')}`, service: 'Steam', nps: '3', lengthM: 10 + i, operatingTemperatureC: 120 + i, purposes: ['personnelProtection'] }).expect(201);
     }
-    await sizeSite(owner, big);
+    await sizeSiteAndWait(owner, big);
     const { text } = await pdf(owner, `/api/v1/sites/${big}/reports/insulation-schedule.pdf?units=SI`);
     expect(text.total).toBeGreaterThanOrEqual(3);
     text.pages.forEach((p, i) => expect(p.text).toContain(`page ${i + 1} of ${text.total}`));

@@ -5,6 +5,7 @@
  */
 import { parseJson } from '../../server/db/db';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner } from '../helpers/api';
+import { sizeSiteAndWait } from '../helpers/sizing';
 
 jest.setTimeout(180_000);
 
@@ -26,16 +27,7 @@ const post = (a: Agent, path: string, body: object = {}) => a.post(path).set('X-
 const patch = (a: Agent, path: string, body: object) => a.patch(path).set('X-CSRF-Token', a.csrf).send(body);
 const del = (a: Agent, path: string) => a.delete(path).set('X-CSRF-Token', a.csrf);
 
-async function sizeSite(a: Agent, site = siteId) {
-  const res = await post(a, `/api/v1/sites/${site}/sizing`).expect(202);
-  for (let i = 0; i < 1200; i++) {
-    const job = (await a.get(`/api/v1/jobs/${res.body.job.id}`).expect(200)).body.job;
-    if (job.status === 'done') return job;
-    if (job.status === 'failed') throw new Error(`sizing failed: ${job.error}`);
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error('sizing did not finish');
-}
+const sizeSite = (a: Agent, site = siteId) => sizeSiteAndWait(a, site);
 
 async function line(a: Agent, body: object, site = siteId) {
   return (await post(a, `/api/v1/sites/${site}/lines`, { lengthM: 50, purposes: ['personnelProtection', 'heatConservation'], ...body }).expect(201)).body.line;
