@@ -3,7 +3,7 @@ import type { ItemSizing, SizingBases } from '../../shared/calc/sizing/types';
 import type { RevisionPurpose, RevisionScheme, RevisionStatus } from '../../shared/schemas/revisions';
 import { type Db, parseJson } from '../db/db';
 import { toItem, type StoredResult } from '../lines/items.repository';
-import { listedDraftItem, type ListedItem, type RevisionTotals, type SiteSnapshot, type SnapshotItem } from './snapshot';
+import { listedDraftItem, type ItemStanding, type ListedItem, type RevisionTotals, type SiteSnapshot, type SnapshotItem } from './snapshot';
 
 type Row = Record<string, unknown>;
 
@@ -143,6 +143,35 @@ export async function listDraftItems(db: Db, siteId: number): Promise<ListedItem
           },
     ),
   );
+}
+
+/** Where each item of a site stands (sized on its current inputs, stale, unsized, unsizable), without reading whole results. */
+export async function listItemStandings(db: Db, siteId: number): Promise<ItemStanding[]> {
+  const rows: Row[] = await db('items as i')
+    .leftJoin('item_results as r', 'r.item_id', 'i.id')
+    .where('i.site_id', siteId)
+    .orderBy('i.id')
+    .select(
+      'i.id',
+      'i.kind',
+      'i.tag',
+      'i.input_hash',
+      'r.input_hash as r_input_hash',
+      'r.failing_purposes as r_failing_purposes',
+      db.raw("JSON_UNQUOTE(JSON_EXTRACT(r.result, '$.error.message')) as r_error"),
+    );
+  return rows.map((r) => {
+    const error = (r.r_error as string | null) ?? undefined;
+    const status: ItemStanding['status'] = r.r_input_hash == null ? 'unsized' : error ? 'error' : r.r_input_hash === r.input_hash ? 'current' : 'stale';
+    return {
+      itemId: r.id as number,
+      kind: r.kind as ItemStanding['kind'],
+      tag: r.tag as string,
+      status,
+      ...(error ? { error } : {}),
+      failing: status === 'unsized' || error ? [] : parseJson<ItemStanding['failing']>(r.r_failing_purposes, []),
+    };
+  });
 }
 
 export async function findActiveRevision(db: Db, siteId: number): Promise<RevisionRecord | undefined> {

@@ -25,7 +25,7 @@ import { storedSettingsOf, teamLibrary } from '../sizing/sizing-context';
 import { COMPARISON_CSV_HEADER, compareLists, comparisonCsvRows } from './compare';
 import * as repo from './revisions.repository';
 import type { RevisionRecord } from './revisions.repository';
-import { blockersOf, libraryUsed, snapshotHash, totalsOf, type ListedItem, type SiteSnapshot } from './snapshot';
+import { blockersOf, libraryUsed, snapshotHash, standingOf, totalsOf, type ListedItem, type SiteSnapshot } from './snapshot';
 
 /** Blockers listed in an answer (all are counted). */
 const BLOCKERS_LISTED = 500;
@@ -115,11 +115,9 @@ async function siteSnapshotNow(db: Db, teamId: number, site: repo.SiteForRevisio
 /** Whether the draft can be issued now: blockers (stale, unsized, unsizable items), failing items, the revision in progress. */
 export async function readiness(deps: { db: Db }, caller: Caller, siteId: number) {
   await siteOrNotFound(deps.db, caller, siteId);
-  const items = await repo.listDraftItems(deps.db, siteId);
+  const items = await repo.listItemStandings(deps.db, siteId);
   const blockers = blockersOf(items);
-  const failing = items
-    .filter((x) => x.result && x.result.failing.length > 0)
-    .map((x) => ({ itemId: x.item.itemId, kind: x.item.kind, tag: x.item.tag, purposes: (x.result as ItemSizing).failing }));
+  const failing = items.filter((x) => x.failing.length > 0).map((x) => ({ itemId: x.itemId, kind: x.kind, tag: x.tag, purposes: x.failing }));
   const active = await repo.findActiveRevision(deps.db, siteId);
   const scheme = schemeOf((await repo.readSiteForRevision(deps.db, caller.teamId, siteId)) as repo.SiteForRevision);
   const next = async (purpose: RevisionPurpose) => revisionNumber(scheme, purpose, (await repo.maxSequence(deps.db, siteId, revisionSeries(scheme, purpose))) + 1);
@@ -159,7 +157,7 @@ export async function prepareRevision(deps: { db: Db }, caller: Caller, siteId: 
     }
     const items = await repo.listDraftItems(trx, siteId);
     if (items.length === 0) throw errors.conflict('EMPTY_LINE_LIST', 'The site has no lines or vessels to issue.');
-    const blockers = blockersOf(items);
+    const blockers = blockersOf(items.map(standingOf));
     if (blockers.length > 0) {
       const listed: ErrorItem[] = blockers.slice(0, BLOCKERS_LISTED).map((b) => ({
         code: b.reason === 'unsized' ? 'ITEM_UNSIZED' : b.reason === 'stale' ? 'ITEM_STALE' : 'ITEM_SIZING_ERROR',

@@ -54,19 +54,24 @@ export type Blocker = { itemId: number; kind: SnapshotItem['kind']; tag: string;
 
 const KIND_WORD = { line: 'Line', vessel: 'Vessel' } as const;
 
+/** Where one item stands, all that readiness needs of it. */
+export type ItemStanding = { itemId: number; kind: SnapshotItem['kind']; tag: string; status: ItemStatus; error?: string; failing: ItemSizing['failing'] };
+
+export const standingOf = (x: ListedItem): ItemStanding => ({ itemId: x.item.itemId, kind: x.item.kind, tag: x.item.tag, status: x.status, error: x.error, failing: x.result?.failing ?? [] });
+
 /** What keeps a line list from being issued: every item not sized on its current inputs, with the reason. */
-export function blockersOf(items: readonly ListedItem[]): Blocker[] {
+export function blockersOf(items: readonly ItemStanding[]): Blocker[] {
   const out: Blocker[] = [];
   for (const x of items) {
     if (x.status === 'current') continue;
-    const what = `${KIND_WORD[x.item.kind]} ${x.item.tag}`;
+    const what = `${KIND_WORD[x.kind]} ${x.tag}`;
     const message =
       x.status === 'unsized'
         ? `${what} has not been sized: size the site.`
         : x.status === 'stale'
           ? `${what} changed since it was sized (its inputs, the site's bases or settings, or a material): size the site again.`
           : `${what} could not be sized: ${x.error ?? 'fix its inputs'}.`;
-    out.push({ itemId: x.item.itemId, kind: x.item.kind, tag: x.item.tag, reason: x.status, message });
+    out.push({ itemId: x.itemId, kind: x.kind, tag: x.tag, reason: x.status, message });
   }
   return out;
 }

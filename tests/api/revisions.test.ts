@@ -4,6 +4,7 @@
  * and the comparison of two revisions or a revision with the draft (JSON and CSV).
  */
 import { parseJson } from '../../server/db/db';
+import { upsertResults } from '../../server/lines/items.repository';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner } from '../helpers/api';
 import { sizeSiteAndWait } from '../helpers/sizing';
 
@@ -79,6 +80,17 @@ describe('preparing a revision', () => {
     await sizeSite(preparer);
     const ready = (await owner.get(`/api/v1/sites/${siteId}/revisions/readiness`).expect(200)).body.readiness;
     expect(ready).toMatchObject({ ready: true, blockerCount: 0, blockers: [] });
+  });
+
+  it('when an item could not be sized, then it blocks too, with the reason sizing gave', async () => {
+    const cr = await ctx.db('items').where({ site_id: siteId, tag: 'CR-010' }).first('id', 'input_hash');
+    await upsertResults(ctx.db, [{ itemId: cr.id, siteId, inputHash: cr.input_hash, result: { error: { code: 'CALCULATION_FAILED', field: 'layers[0]', message: 'the surface balance did not converge' } }, sizedAt: new Date() }]);
+    const ready = (await owner.get(`/api/v1/sites/${siteId}/revisions/readiness`).expect(200)).body.readiness;
+    expect(ready.blockers).toEqual([expect.objectContaining({ tag: 'CR-010', reason: 'error', message: 'Line CR-010 could not be sized: the surface balance did not converge.' })]);
+    const res = await post(preparer, `/api/v1/sites/${siteId}/revisions`, { purpose: 'review' }).expect(409);
+    expect(res.body.errors[1]).toMatchObject({ code: 'ITEM_SIZING_ERROR', field: 'lines[CR-010]' });
+    await sizeSite(preparer);
+    expect((await owner.get(`/api/v1/sites/${siteId}/revisions/readiness`).expect(200)).body.readiness.ready).toBe(true);
   });
 
   it('when an engineer prepares, then revision A holds a snapshot of every item with its result, the bases and settings', async () => {
