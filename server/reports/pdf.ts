@@ -220,19 +220,28 @@ function titleBlock(l: Layout, d: ReportDocument) {
   l.font('bold', 16);
   l.textLine(`Lagline — ${d.title}`, x0, l.y, CONTENT_WIDTH);
   l.y += 26;
-  const top = l.y;
-  cells.forEach((row, r) => {
-    row.forEach(([k, v], c) => {
+  let y = l.y;
+  const valueLine = 13;
+  for (const row of cells) {
+    // A long site name or signatory wraps within its cell; the row grows to the tallest cell.
+    const weight = (c: number, r: number): Weight => (r === 0 && c === 0 ? 'semibold' : 'regular');
+    const r = cells.indexOf(row);
+    const lines = row.map(([, v], c) => {
+      l.font(weight(c, r), 10.5);
+      return l.wrap(v, colW - 10);
+    });
+    const h = Math.max(cellH, 18 + Math.max(...lines.map((x) => x.length)) * valueLine);
+    row.forEach(([k], c) => {
       const x = x0 + c * colW;
-      const y = top + r * cellH;
-      doc.rect(x, y, colW, cellH).lineWidth(0.6).strokeColor(INK).stroke();
+      doc.rect(x, y, colW, h).lineWidth(0.6).strokeColor(INK).stroke();
       l.font('semibold', 7.5, MUTED);
       l.textLine(k.toUpperCase(), x + 5, y + 4, colW - 10);
-      l.font(r === 2 || c !== 0 ? 'regular' : 'semibold', 10.5);
-      l.textLine(l.wrap(v, colW - 10)[0], x + 5, y + 15, colW - 10);
+      l.font(weight(c, r), 10.5);
+      lines[c].forEach((line, i) => l.textLine(line, x + 5, y + 15 + i * valueLine, colW - 10));
     });
-  });
-  l.y = top + cells.length * cellH + 10;
+    y += h;
+  }
+  l.y = y + 10;
   if (d.description) l.paragraph(d.description, 9, 'muted');
 }
 

@@ -300,6 +300,14 @@ describe('every report', () => {
     for (let i = 1; i <= 90; i++) expect(text.text).toContain(`L-${String(i).padStart(3, '0')} Steam NPS 3`);
   });
 
+  it('when the site name is long, then the title block wraps it instead of cutting it off', async () => {
+    const name = 'North East Combined Heat and Power Plant, Steam Distribution and Condensate Recovery Areas 3 to 7 (Phase Two)';
+    const long = (await post(owner, '/api/v1/sites', { name, designBases: BASES }).expect(201)).body.site.id;
+    const { text } = await pdf(owner, `/api/v1/sites/${long}/reports/take-off.pdf`);
+    const block = text.pages[0].text.split('REPORT')[0].replace(/\s+/g, ' ');
+    expect(block).toContain(name);
+  });
+
   it('when a query is wrong, then 400 names the parameter; another site’s revision is a 404', async () => {
     const base = `/api/v1/sites/${siteId}/reports`;
     const cases: [string, string][] = [
