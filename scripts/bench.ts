@@ -5,6 +5,7 @@
  *   API health and single-case latency while a 10,000-case batch runs [ms]
  *   quick-sizing first paint in headless Chromium (when the web app is built and Chromium exists) [ms]
  *   register photo from a 40-megapixel JPEG and PNG: time [ms] and peak resident memory [MB]
+ *   insulation schedule of 10,000 lines rendered to PDF [s] (target < 20 s)
  * `--json` prints one JSON object of named figures instead of the table.
  */
 import { spawnSync } from 'node:child_process';
@@ -87,8 +88,11 @@ function apiUnderLoad(): Record<string, unknown> {
 function lineLists(): Record<string, unknown> {
   return runJsonScript('bench-lines.ts', [], { ...process.env, NODE_ENV: 'test' });
 }
+const schedulePdf = runJsonScript('bench-reports.ts', ['10000'], process.env);
 
 const figures = {
+  schedulePdf10kS: (schedulePdf.schedulePdf10kS as number | undefined) ?? null,
+  schedulePdf10k: schedulePdf,
   analyse: timeEach('analyse', 5000, 1),
   solve: timeEach('solve', 500, 2),
   cliAnalyse10000: cliWall('analyse', 10_000, 3),
@@ -116,6 +120,8 @@ if (asJson) {
   }
   const l = figures as Record<string, unknown>;
   console.log(`line list: 10,000 lines sized through the job in ${l.sizeSite10kLinesS ?? '–'} s (target ≤ 10 s); health during it median ${l.healthDuringSizingMedianMs ?? '–'} ms, max ${l.healthDuringSizingMaxMs ?? '–'} ms (target < 200 ms); first page of 1,000 lines ${l.listPage1000Ms ?? '–'} ms (target ≤ 300 ms)`);
+  const r = figures.schedulePdf10k;
+  console.log(`insulation schedule PDF, 10,000 lines: ${figures.schedulePdf10kS ?? '–'} s wall, ${r.schedulePdf10kCpuS ?? '–'} s CPU, ${r.pages ?? '–'} pages (target < 20 s)${r.note ? ' — ' + r.note : ''}`);
   const p = figures.quickSizingPaint;
   if (p) console.log(`quick sizing first contentful paint: ${p.firstContentfulPaintMs ?? '–'} ms (target < 1500 ms)${p.note ? ' — ' + p.note : ''}`);
   const ph = figures.registerPhoto40mp as { jpeg40mp?: { ms: number; rssRiseMB: number }; png40mp?: { ms: number; rssRiseMB: number }; note?: string };

@@ -1,7 +1,8 @@
 // @ts-check
 /**
- * Demo data: an invented plant, Ashcombe Vale Works, with one user per role (credentials in
- * demo-credentials.json, printed at start-up) and a few sites with their design bases.
+ * Demo data: an invented plant, Ashcombe Vale Works, with one user per role and a second engineer (so three
+ * people can prepare, check and approve a revision; credentials in demo-credentials.json, printed at
+ * start-up) and a few sites with their design bases.
  */
 const crypto = require('node:crypto');
 const bcrypt = require('bcrypt');
@@ -54,7 +55,8 @@ exports.seed = async function seed(knex) {
   const ids = {};
   for (const u of demo.users) {
     const [id] = await knex('users').insert({ email: u.email, name: u.name, password_hash: passwordHash });
-    ids[u.role] = id;
+    // The first user of a role stands for it (the second engineer only signs revisions).
+    ids[u.role] ??= id;
     await knex('memberships').insert({ team_id: teamId, user_id: id, role: u.role });
     await knex('user_settings').insert({ user_id: id, unit_system: u.role === 'contractor' ? 'US' : 'SI' });
   }

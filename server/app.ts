@@ -26,6 +26,8 @@ import type { Mailer } from './mail/mailer';
 import { registerMeRoutes } from './me/me.routes';
 import { registerRegisterRoutes } from './register/register.routes';
 import { createReminderScheduler, type ReminderScheduler } from './register/reminders';
+import { registerReportRoutes } from './reports/reports.routes';
+import { registerRevisionRoutes } from './revisions/revisions.routes';
 import { registerSiteRoutes } from './sites/sites.routes';
 import { registerTeamRoutes } from './team/team.routes';
 
@@ -113,6 +115,8 @@ export function createApp({ db, mailer, config, logger = createLogger(config.log
   registerLineRoutes(api, deps);
   registerSizingRoutes(api, deps);
   registerRegisterRoutes(api, deps, reminders.poke);
+  registerRevisionRoutes(api, deps);
+  registerReportRoutes(api, deps);
   registerDevMailRoutes(api, deps);
   registerCalculationRoutes(api, deps);
   app.use(api);

@@ -12,6 +12,7 @@ import { insertJob } from '../../server/jobs/jobs.repository';
 import { addSiteMember, insertSite } from '../../server/sites/sites.repository';
 import { ROLES, type Role } from '../../shared/schemas/common';
 import type { Permission } from '../../shared/schemas/permissions';
+import { sizeSiteAndWait } from '../helpers/sizing';
 import { addMember, type Agent, type ApiContext, createApiContext, signUpOwner, STRONG_PASSWORD, uniqueEmail } from '../helpers/api';
 
 jest.setTimeout(60_000);
@@ -24,6 +25,12 @@ const users = {} as Record<Role, { email: string; userId: number }>;
 let siteId: number;
 let resetUserId: number;
 let uploadDir: string;
+/** A sized site with an issued revision, for the revision and report routes. */
+let revSiteId: number;
+let issuedRevisionId: number;
+/** Two more engineers who prepare and check the revisions other roles then sign. */
+let preparerAgent: Agent;
+let checkerAgent: Agent;
 
 const CASE = {
   geometry: { type: 'pipe', outerDiameterM: 0.1143, orientation: 'horizontal' },
@@ -50,6 +57,14 @@ beforeAll(async () => {
   photoJpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#b23a12' } }).jpeg().toBuffer();
   const resettee = await signUpOwner(ctx, { teamName: 'Reset team' });
   resetUserId = resettee.userId;
+  preparerAgent = (await addMember(ctx, owner, 'engineer')).agent;
+  checkerAgent = (await addMember(ctx, owner, 'engineer')).agent;
+  revSiteId = (await owner.post('/api/v1/sites').set('X-CSRF-Token', owner.csrf).send({ name: 'Revision matrix site' }).expect(201)).body.site.id;
+  await addSiteMember(ctx.db, revSiteId, users.contractor.userId, ownerId);
+  await owner.post(`/api/v1/sites/${revSiteId}/lines`).set('X-CSRF-Token', owner.csrf).send({ ...LINE, tag: 'R-1' }).expect(201);
+  await sizeSiteAndWait(owner, revSiteId);
+  const issued = await freshRevision('checked');
+  issuedRevisionId = (await owner.post(`/api/v1/revisions/${issued.id}/approve`).set('X-CSRF-Token', owner.csrf).send({ snapshotHash: issued.snapshotHash }).expect(200)).body.revision.id;
 }, 60_000);
 afterAll(async () => {
   await ctx.close();
@@ -130,6 +145,24 @@ const SPEC: Record<string, 'public' | 'signedIn' | { permission: Permission; rol
   'GET /api/v1/register/photos/:id/image': { permission: 'site.read', roles: ALL },
   'GET /api/v1/register/photos/:id/thumbnail': { permission: 'site.read', roles: ALL },
   'DELETE /api/v1/register/photos/:id': { permission: 'surfaces.assign', roles: ['owner', 'safety'] },
+  'GET /api/v1/sites/:siteId/revisions': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/revisions/readiness': { permission: 'site.read', roles: ALL },
+  'POST /api/v1/sites/:siteId/revisions': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'GET /api/v1/sites/:siteId/revisions/compare': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/revisions/compare.csv': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/revision-scheme': { permission: 'site.read', roles: ALL },
+  'PUT /api/v1/sites/:siteId/revision-scheme': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'GET /api/v1/revisions/:id': { permission: 'site.read', roles: ALL },
+  'PATCH /api/v1/revisions/:id': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'DELETE /api/v1/revisions/:id': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'POST /api/v1/revisions/:id/check': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'POST /api/v1/revisions/:id/approve': { permission: 'revisions.issue', roles: ['owner', 'engineer'] },
+  'GET /api/v1/sites/:siteId/reports/insulation-schedule.pdf': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/reports/insulation-schedule.csv': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/reports/heat-loss-summary.pdf': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/reports/heat-loss-summary.csv': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/reports/take-off.pdf': { permission: 'site.read', roles: ALL },
+  'GET /api/v1/sites/:siteId/reports/take-off.csv': { permission: 'site.read', roles: ALL },
 };
 
 /** `photo`: sent as multipart field "photos" instead of a JSON body. */
@@ -184,6 +217,16 @@ async function freshPhoto(): Promise<number> {
     .attach('photos', photoJpeg, 'matrix.jpg')
     .expect(201);
   return res.body.entry.photos[0].id;
+}
+/**
+ * A revision of the revision site prepared by one extra engineer (and checked by the other), so that the
+ * owner and the matrix engineer may sign it; any revision still in progress there is withdrawn first.
+ */
+async function freshRevision(status: 'prepared' | 'checked'): Promise<{ id: number; snapshotHash: string }> {
+  await ctx.db('revisions').where({ site_id: revSiteId }).whereNot({ status: 'issued' }).delete();
+  const r = (await preparerAgent.post(`/api/v1/sites/${revSiteId}/revisions`).set('X-CSRF-Token', preparerAgent.csrf).send({ purpose: 'review' }).expect(201)).body.revision;
+  if (status === 'checked') await checkerAgent.post(`/api/v1/revisions/${r.id}/check`).set('X-CSRF-Token', checkerAgent.csrf).send({ snapshotHash: r.snapshotHash }).expect(200);
+  return r;
 }
 const freshSite = () => insertSite(ctx.db, { teamId, name: `Doomed ${n++}`, description: '', designBases: {}, createdBy: ownerId });
 
@@ -278,6 +321,33 @@ const SAMPLES: Record<string, () => Promise<Sample>> = {
   'GET /api/v1/register/photos/:id/image': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}/image` }),
   'GET /api/v1/register/photos/:id/thumbnail': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}/thumbnail` }),
   'DELETE /api/v1/register/photos/:id': async () => ({ path: `/api/v1/register/photos/${await freshPhoto()}` }),
+  'GET /api/v1/sites/:siteId/revisions': async () => ({ path: `/api/v1/sites/${revSiteId}/revisions` }),
+  'GET /api/v1/sites/:siteId/revisions/readiness': async () => ({ path: `/api/v1/sites/${revSiteId}/revisions/readiness` }),
+  'POST /api/v1/sites/:siteId/revisions': async () => {
+    await ctx.db('revisions').where({ site_id: revSiteId }).whereNot({ status: 'issued' }).delete();
+    return { path: `/api/v1/sites/${revSiteId}/revisions`, body: { purpose: 'review' } };
+  },
+  'GET /api/v1/sites/:siteId/revisions/compare': async () => ({ path: `/api/v1/sites/${revSiteId}/revisions/compare?from=${issuedRevisionId}&to=draft` }),
+  'GET /api/v1/sites/:siteId/revisions/compare.csv': async () => ({ path: `/api/v1/sites/${revSiteId}/revisions/compare.csv?from=${issuedRevisionId}` }),
+  'GET /api/v1/sites/:siteId/revision-scheme': async () => ({ path: `/api/v1/sites/${revSiteId}/revision-scheme` }),
+  'PUT /api/v1/sites/:siteId/revision-scheme': async () => ({ path: `/api/v1/sites/${revSiteId}/revision-scheme`, body: { kind: 'trade' } }),
+  'GET /api/v1/revisions/:id': async () => ({ path: `/api/v1/revisions/${issuedRevisionId}` }),
+  'PATCH /api/v1/revisions/:id': async () => ({ path: `/api/v1/revisions/${(await freshRevision('prepared')).id}`, body: { description: 'Checked against the P&IDs' } }),
+  'DELETE /api/v1/revisions/:id': async () => ({ path: `/api/v1/revisions/${(await freshRevision('prepared')).id}` }),
+  'POST /api/v1/revisions/:id/check': async () => {
+    const r = await freshRevision('prepared');
+    return { path: `/api/v1/revisions/${r.id}/check`, body: { snapshotHash: r.snapshotHash } };
+  },
+  'POST /api/v1/revisions/:id/approve': async () => {
+    const r = await freshRevision('checked');
+    return { path: `/api/v1/revisions/${r.id}/approve`, body: { snapshotHash: r.snapshotHash } };
+  },
+  'GET /api/v1/sites/:siteId/reports/insulation-schedule.pdf': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/insulation-schedule.pdf?revision=${issuedRevisionId}` }),
+  'GET /api/v1/sites/:siteId/reports/insulation-schedule.csv': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/insulation-schedule.csv` }),
+  'GET /api/v1/sites/:siteId/reports/heat-loss-summary.pdf': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/heat-loss-summary.pdf?units=US` }),
+  'GET /api/v1/sites/:siteId/reports/heat-loss-summary.csv': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/heat-loss-summary.csv?revision=${issuedRevisionId}` }),
+  'GET /api/v1/sites/:siteId/reports/take-off.pdf': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/take-off.pdf?revision=draft&overlapPct=12` }),
+  'GET /api/v1/sites/:siteId/reports/take-off.csv': async () => ({ path: `/api/v1/sites/${revSiteId}/reports/take-off.csv?units=SI` }),
 };
 
 async function agentFor(role: Role | 'anonymous'): Promise<Agent> {
@@ -345,7 +415,7 @@ describe('role matrix', () => {
       for (const who of WHO) {
         const sample = await SAMPLES[`${r.method} ${r.path}`]();
         const agent = await agentFor(who);
-        const method = r.method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+        const method = r.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
         let req = agent[method](sample.path).set('X-CSRF-Token', agent.csrf);
         if (sample.photo) req = req.attach('photos', sample.photo, 'matrix.jpg');
         else if (sample.body !== undefined) req = req.send(sample.body as object);
@@ -379,7 +449,7 @@ describe('role matrix', () => {
     const other = await freshSite();
     const contractor = await agentFor('contractor');
     const list = await contractor.get('/api/v1/sites').expect(200);
-    expect(list.body.sites.map((s: { id: number }) => s.id)).toEqual([siteId]);
+    expect(list.body.sites.map((s: { id: number }) => s.id).sort((a: number, b: number) => a - b)).toEqual([siteId, revSiteId]);
     await contractor.get(`/api/v1/sites/${other}`).expect(404);
     const viewer = await agentFor('viewer');
     const all = await viewer.get('/api/v1/sites').expect(200);

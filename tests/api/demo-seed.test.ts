@@ -46,6 +46,22 @@ describe('demo data and the test server', () => {
     expect(all.sites[0].designBases.touch.airTemperatureC).toEqual(expect.any(Number));
   });
 
+  it('when the demo is seeded, then the boiler house carries revision A, prepared, checked and approved by three demo users', async () => {
+    const engineer = await signIn('engineer@lagline.test', demo.password);
+    const site = await server.db('sites').where({ name: 'Boiler house' }).first('id');
+    const res = await fetch(`${server.url}/api/v1/sites/${site.id}/revisions`, { headers: { Cookie: engineer.cookie } });
+    const { revisions } = await res.json();
+    expect(revisions).toHaveLength(1);
+    expect(revisions[0]).toMatchObject({
+      number: 'A',
+      status: 'issued',
+      prepared: { name: 'Idris Pembleton' },
+      checked: { name: 'Ewan Strathdee' },
+      approved: { name: 'Morwenna Tregear' },
+    });
+    expect(revisions[0].itemCount).toBeGreaterThan(100);
+  });
+
   it('when a reset is requested on the test server, then the caught mail links back to that server', async () => {
     const first = await fetch(`${server.url}/api/v1/auth/session`);
     const cookie = first.headers.get('set-cookie')!.split(';')[0];

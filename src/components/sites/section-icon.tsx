@@ -4,11 +4,11 @@ import { colors, type ColorName } from '../../theme';
 import { Icon, type IconName } from '../ui';
 
 /** Glyphs of a site's sections that the shared icon set lacks, drawn in the same style. */
-export type SectionGlyph = 'overview' | 'lines' | 'vessels' | 'library' | 'sizing';
+export type SectionGlyph = 'overview' | 'lines' | 'vessels' | 'revisions' | 'library' | 'sizing';
 
 export type SectionIconName = IconName | SectionGlyph;
 
-const GLYPHS: readonly string[] = ['overview', 'lines', 'vessels', 'library', 'sizing'];
+const GLYPHS: readonly string[] = ['overview', 'lines', 'vessels', 'revisions', 'library', 'sizing'];
 
 /** An icon of a site section: one of the shared icons, or a section glyph. Decorative. */
 export function SectionIcon({ name, size = 22, tone = 'text' }: { name: SectionIconName; size?: number; tone?: ColorName }) {
@@ -32,6 +32,12 @@ export function SectionIcon({ name, size = 22, tone = 'text' }: { name: SectionI
         <>
           <Rect x={6} y={3} width={12} height={18} rx={5} {...stroke} />
           <Path d="M6 9h12M6 15h12" {...stroke} />
+        </>
+      )}
+      {name === 'revisions' && (
+        <>
+          <Path d="M7 3h7l4 4v14H7z" {...stroke} />
+          <Path d="M14 3v4h4M10 12h5M10 16h5" {...stroke} />
         </>
       )}
       {name === 'library' && (

@@ -1,0 +1,5 @@
+export * from './compare-screen';
+export * from './parts';
+export * from './prepare-revision-screen';
+export * from './revision-screen';
+export * from './revisions-screen';
