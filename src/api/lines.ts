@@ -112,6 +112,18 @@ export function useCreateItem(siteId: number | string, kind: ItemKind) {
   });
 }
 
+/** Creates a line or vessel in a site picked at the time (quick sizing's "save to a site"). */
+export function useCreateItemInSite() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ siteId, kind, input }: { siteId: number | string; kind: ItemKind; input: ItemInput }) =>
+      api.post<Record<string, Item>>(`/sites/${enc(siteId)}/${PLURAL[kind]}`, input),
+    onSuccess: (result, { siteId }) => {
+      if (result.kind === 'ok') invalidateSiteItems(queryClient, siteId);
+    },
+  });
+}
+
 export function useUpdateItem(kind: ItemKind, id: number | string) {
   const queryClient = useQueryClient();
   return useMutation({

@@ -111,6 +111,30 @@ export function useRevision(id: string) {
   });
 }
 
+/** How a site numbers its revisions (trade letters and numbers, or the team's own prefix and counter). */
+export function useRevisionScheme(siteId: string) {
+  return useQuery({
+    queryKey: revisionKeys.scheme(siteId),
+    queryFn: async () => unwrap(await api.get<{ scheme: RevisionScheme }>(`${sitePath(siteId)}/revision-scheme`)).scheme,
+    staleTime: revisionStaleTimes.list,
+    retry: shouldRetry,
+    enabled: siteId !== '',
+  });
+}
+
+/** Sets the numbering of the site's next revisions; the numbers readiness offers follow it. */
+export function useUpdateRevisionScheme(siteId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (scheme: RevisionScheme) => api.request<{ scheme: RevisionScheme }>('PUT', `${sitePath(siteId)}/revision-scheme`, scheme),
+    onSuccess: (result) => {
+      if (result.kind !== 'ok') return;
+      queryClient.setQueryData(revisionKeys.scheme(siteId), result.data.scheme);
+      void queryClient.invalidateQueries({ queryKey: revisionKeys.readiness(siteId) });
+    },
+  });
+}
+
 /** Query string of a comparison (the API's defaults apply to what is left out). */
 export function comparisonQuery(from: Which | null, to: Which | null, units: UnitSystem): string {
   const q = new URLSearchParams();

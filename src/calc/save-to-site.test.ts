@@ -265,7 +265,7 @@ describe('the saved item sizes for the same purpose', () => {
     location: b.location ?? 'outdoor',
     operatingTemperatureC: b.operatingTemperatureC,
     purposes: b.purposes,
-    purposeParameters: b.purposeParameters ?? {},
+    purposeParameters: (b.purposeParameters ?? {}) as SizingItem['purposeParameters'],
     fittings: { valves: 0, flanges: 0, elbows: 0, tees: 0 },
     fittingsInsulated: true,
   });

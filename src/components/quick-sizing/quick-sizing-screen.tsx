@@ -10,6 +10,7 @@ import type { UnitSystem } from '../../calc/units';
 import { useLiveCalc } from '../../calc/use-live-calc';
 import { breakpoints, spacing } from '../../theme';
 import { useHydrated } from '../common/use-hydrated';
+import { SaveToSite } from '../save-to-site';
 import { Banner, Button, Screen, Text, TextLink } from '../ui';
 
 import { ChartsPanel } from './charts-panel';
@@ -107,6 +108,8 @@ export function QuickSizingScreen() {
   };
 
   const errors = output.kind === 'invalid' ? output.errors : {};
+  // The case's own link goes with a saved item (in its notes), so the quick case can be opened again.
+  const caseLink = output.kind === 'invalid' ? undefined : `/quick-sizing?${encodeCaseQuery(output.case, draftOptions(draft), system)}`;
   const inputs = (
     <View style={styles.stack}>
       <InputsPanel draft={draft} system={system} errors={errors} onChange={onChange} serviceLimits={presentation?.serviceLimits} />
@@ -120,7 +123,8 @@ export function QuickSizingScreen() {
   );
   const results = (
     <View style={styles.stack}>
-      <ResultsPanel output={output} presentation={presentation} pending={pending} signedIn={signedIn} />
+      <ResultsPanel output={output} presentation={presentation} pending={pending} />
+      <SaveToSite draft={draft} system={system} calculable={output.kind !== 'invalid'} caseLink={caseLink} />
       {output.kind === 'ok' ? <ChartsPanel draft={draft} output={output} system={system} wide={large} /> : null}
       <MethodPanel result={output.kind === 'ok' ? output.result : null} warnings={presentation?.warnings} />
     </View>

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import type { LiveOutput } from '../../calc/live';
 import type { Presentation } from '../../calc/present';
 import { spacing } from '../../theme';
-import { Banner, Button, Card, Text } from '../ui';
+import { Banner, Card, Text } from '../ui';
 
 import { ResultValue, VerdictBadge } from './result-value';
 
@@ -12,11 +12,10 @@ export interface ResultsPanelProps {
   /** The output in display units and words; null unless the output is a result. */
   presentation: Presentation | null;
   pending: boolean;
-  signedIn: boolean;
 }
 
 /** The numbers: verdict, headline results large with units, then the details and the year's energy. */
-export function ResultsPanel({ output, presentation: p, pending, signedIn }: ResultsPanelProps) {
+export function ResultsPanel({ output, presentation: p, pending }: ResultsPanelProps) {
   if (output.kind === 'invalid') {
     const entries = Object.entries(output.errors);
     return (
@@ -85,14 +84,6 @@ export function ResultsPanel({ output, presentation: p, pending, signedIn }: Res
           Fill in the energy and money assumptions to see energy, cost and CO₂.
         </Banner>
       )}
-      <View style={styles.save}>
-        <Button label="Save to a site" variant="secondary" disabled testID="qs-save-to-site" />
-        <Text variant="caption" tone="textMuted">
-          {signedIn
-            ? 'Saving a quick case into a site’s line list is not available yet. Copy the page link to keep or share this case.'
-            : 'Copy the page link to keep or share this case. Saving into a site’s line list will come for signed-in teams.'}
-        </Text>
-      </View>
     </View>
   );
 }
@@ -101,5 +92,4 @@ const styles = StyleSheet.create({
   col: { gap: spacing.lg },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
   list: { gap: spacing.sm },
-  save: { gap: spacing.xs },
 });
