@@ -1,16 +1,19 @@
 import { Formik } from 'formik';
 import { useRouter } from 'expo-router';
+import { useEffect } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { can } from '../../../shared/schemas/permissions';
 import { REVISION_PURPOSE_LABELS, REVISION_PURPOSES, revisionPrepareSchema, type RevisionPurpose } from '../../../shared/schemas/revisions';
 import { problemMessage } from '../../api/client';
+import { isFinished, useSiteSizing } from '../../api/jobs';
 import { usePrepareRevision, useReadiness, type Blocker } from '../../api/revisions';
 import { useSession } from '../../api/session';
 import { useSite } from '../../api/sites';
 import { colors, radius, spacing } from '../../theme';
 import { Loading, QueryError } from '../common/query-state';
 import { FormErrorBanner, FormTextField, trimStrings, validateWithSchema } from '../forms';
+import { SizeAll, SizingStatus } from '../lines/size-all';
 import { Banner, Button, Card, ChoiceGroup, Icon, Screen, Text, TextLink } from '../ui';
 
 import { revisionName } from './parts';
@@ -50,6 +53,15 @@ export function PrepareRevisionScreen({ siteId }: { siteId: string }) {
   const router = useRouter();
   const mayIssue = can(session.data?.role, 'revisions.issue');
   const r = readiness.data;
+  // Stale and unsized items are fixed by sizing the site; items that cannot be sized need their inputs changed.
+  const sizable = !!r && r.blockers.some((b) => b.reason !== 'error');
+  const sizing = useSiteSizing(siteId);
+  const finished = isFinished(sizing.job);
+  const refetchReadiness = readiness.refetch;
+  // When the site's sizing finishes, the blockers are asked for again (they are what sizing changes).
+  useEffect(() => {
+    if (finished) void refetchReadiness();
+  }, [finished, sizing.jobId, refetchReadiness]);
   const toInput = (v: Values) => {
     const t = trimStrings(v);
     return t.description ? { purpose: t.purpose, description: t.description } : { purpose: t.purpose };
@@ -75,9 +87,27 @@ export function PrepareRevisionScreen({ siteId }: { siteId: string }) {
             </Banner>
           ) : null}
           {r.blockerCount > 0 ? (
-            <Card title={`${r.blockerCount} item${r.blockerCount === 1 ? '' : 's'} to fix first`} subtitle="Every item must be sized on its current inputs before the schedule is frozen. Size the site again from its line list, then come back." testID="prepare-blocked">
+            <Card
+              title={`${r.blockerCount} item${r.blockerCount === 1 ? '' : 's'} to fix first`}
+              subtitle={
+                sizable
+                  ? 'Every item must be sized on its current inputs before the schedule is frozen. Size all here; the list below refreshes when sizing is done.'
+                  : 'Every item must be sized on its current inputs before the schedule is frozen. Fix these items in the line list, then size the site again.'
+              }
+              testID="prepare-blocked"
+            >
+              {sizable ? (
+                <View style={styles.sizing}>
+                  <View style={styles.sizeAll}>
+                    <SizeAll siteId={siteId} />
+                  </View>
+                  <SizingStatus siteId={siteId} />
+                </View>
+              ) : null}
               <BlockerList blockers={r.blockers} total={r.blockerCount} />
             </Card>
+          ) : sizing.job?.status === 'done' ? (
+            <SizingStatus siteId={siteId} />
           ) : null}
           {r.itemCount === 0 ? (
             <Banner tone="caution" title="The line list is empty">
@@ -134,6 +164,8 @@ export function PrepareRevisionScreen({ siteId }: { siteId: string }) {
 
 const styles = StyleSheet.create({
   form: { gap: spacing.lg },
+  sizing: { gap: spacing.sm },
+  sizeAll: { flexDirection: 'row' },
   blockers: { gap: spacing.sm },
   blocker: {
     flexDirection: 'row',

@@ -11,6 +11,7 @@ import { ReportDownloads } from '../reports';
 import { Banner, Button, Card, EmptyState, Screen, Text, TextLink } from '../ui';
 
 import { RevisionStatusTag, SignatureList, UnitsChoice, revisionName, totalHeatText, useUnitChoice } from './parts';
+import { RevisionSchemePanel } from './revision-scheme-panel';
 
 function RevisionCard({ siteId, revision, units, latestIssued }: { siteId: string; revision: Revision; units: 'SI' | 'US'; latestIssued: boolean }) {
   const heat = totalHeatText(revision.totals.heatLossW, units);
@@ -99,6 +100,8 @@ export function RevisionsScreen({ siteId }: { siteId: string }) {
         </View>
         <ReportDownloads siteId={siteId} revision={null} units={units} label="draft" />
       </Card>
+
+      <RevisionSchemePanel siteId={siteId} nextNumbers={r?.nextNumbers} />
 
       <Text variant="title">History</Text>
       {revisions.isPending ? (
