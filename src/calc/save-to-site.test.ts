@@ -123,6 +123,12 @@ describe('saveToSiteBody: every purpose with its limit', () => {
     expect((m.body as VesselCreateInput).purposeParameters?.heatConservation).not.toHaveProperty('maxHeatLossWPerM');
   });
 
+  it('when the choices are not made yet, then what would be saved is still there to show, limit included', () => {
+    const m = saveToSiteBody(draft({ purpose: 'conservation', maxHeatLossWPerM: 42 }), { tag: '' });
+    expect(m.body).toBeNull();
+    expect(m.proposed).toMatchObject({ nps: '4', purposes: ['heatConservation'], purposeParameters: { heatConservation: { maxHeatLossWPerM: 42 } } });
+  });
+
   it('when heat conservation has no limit, then the site’s rule applies and it says so', () => {
     const m = saveToSiteBody(draft({ purpose: 'conservation', maxHeatLossWPerM: null }), choices);
     expect(m.body).not.toHaveProperty('purposeParameters');

@@ -78,6 +78,8 @@ export interface SaveMapping {
   itemKind: 'line' | 'vessel' | null;
   /** The create body; null while any problem stands. */
   body: LineCreateInput | VesselCreateInput | null;
+  /** The body as far as it is built, problems or not: what would be saved, for showing before it can be. */
+  proposed: Partial<LineCreateInput & VesselCreateInput>;
   problems: SaveProblem[];
   purpose: Purpose;
   /** The build-up is saved as existing insulation (checked), not sized: the case was a check. */
@@ -169,7 +171,7 @@ export function saveToSiteBody(d: Draft, choices: SaveChoices): SaveMapping {
   const fixed = d.mode === 'check';
   const leftBehind: LeftBehind[] = [{ code: 'conditions' }];
   if (kind.itemKind === null) {
-    return { itemKind: null, body: null, problems: [{ field: 'kind', code: 'NOT_A_LINE_LIST_ITEM', message: kind.reason }], purpose, fixed, leftBehind };
+    return { itemKind: null, body: null, proposed: {}, problems: [{ field: 'kind', code: 'NOT_A_LINE_LIST_ITEM', message: kind.reason }], purpose, fixed, leftBehind };
   }
   const itemKind = kind.itemKind;
   if (!purposeAvailable(d.purpose, d.kind)) {
@@ -276,6 +278,7 @@ export function saveToSiteBody(d: Draft, choices: SaveChoices): SaveMapping {
   return {
     itemKind,
     body: problems.length === 0 ? (body as LineCreateInput | VesselCreateInput) : null,
+    proposed: body as Partial<LineCreateInput & VesselCreateInput>,
     problems,
     purpose,
     fixed,

@@ -222,3 +222,24 @@ export async function fill(page: Page, testId: string, value: string): Promise<v
 export function viewportTag(v: Viewport): string {
   return `${v.width}x${v.height}`;
 }
+
+type DemoCredentials = { password: string; users: { role: string; name: string; email: string }[] };
+
+/** The demo's sign-ins (seeds/demo-credentials.json): one person per role. */
+export function demoCredentials(): DemoCredentials {
+  return JSON.parse(fs.readFileSync(path.join(ROOT, 'seeds', 'demo-credentials.json'), 'utf8')) as DemoCredentials;
+}
+
+/** Signs in as the demo's first member with this role (a fresh session) and waits for the sites list. */
+export async function signInAsDemo(page: Page, serverUrl: string, role: string): Promise<void> {
+  const demo = demoCredentials();
+  const user = demo.users.find((u) => u.role === role);
+  if (!user) throw new Error(`The demo has no ${role}`);
+  await page.context().clearCookies();
+  await gotoApp(page, `${serverUrl}/`);
+  await fill(page, 'signin-email', user.email);
+  await fill(page, 'signin-password', demo.password);
+  await page.getByTestId('signin-submit').click();
+  await page.waitForURL('**/sites');
+  await page.getByTestId('sites-list').waitFor();
+}

@@ -48,8 +48,8 @@ async function siteId(server: TestServer, name: string): Promise<number> {
 }
 
 /**
- * Every visible control of the page that is smaller than the 44 px a thumb needs. A text input counts by the
- * bordered field box a person taps.
+ * Every visible control of the page that is smaller than the 44 px a thumb needs. A text input counts by its own
+ * size (the element a tap focuses), not by the box drawn around it.
  */
 async function smallTargets(page: Page, within: string): Promise<string[]> {
   return page.evaluate((sel) => {
@@ -57,8 +57,7 @@ async function smallTargets(page: Page, within: string): Promise<string[]> {
     if (!root) return ['(no root)'];
     const out: string[] = [];
     for (const el of Array.from(root.querySelectorAll('a, button, [role="button"], [role="radio"], [role="link"], input:not([type="file"]), textarea'))) {
-      const target = el.tagName === 'INPUT' || el.tagName === 'TEXTAREA' ? ((el.parentElement as HTMLElement) ?? el) : el;
-      const r = (target as HTMLElement).getBoundingClientRect();
+      const r = (el as HTMLElement).getBoundingClientRect();
       if (r.width === 0 || r.height === 0) continue;
       if (r.height < 44 || r.width < 44) out.push(`${(el as HTMLElement).getAttribute('aria-label') || (el as HTMLElement).innerText || el.tagName} ${Math.round(r.width)}×${Math.round(r.height)}`);
     }

@@ -108,8 +108,6 @@ export function QuickSizingScreen() {
   };
 
   const errors = output.kind === 'invalid' ? output.errors : {};
-  // The case's own link goes with a saved item (in its notes), so the quick case can be opened again.
-  const caseLink = output.kind === 'invalid' ? undefined : `/quick-sizing?${encodeCaseQuery(output.case, draftOptions(draft), system)}`;
   const inputs = (
     <View style={styles.stack}>
       <InputsPanel draft={draft} system={system} errors={errors} onChange={onChange} serviceLimits={presentation?.serviceLimits} />
@@ -124,7 +122,7 @@ export function QuickSizingScreen() {
   const results = (
     <View style={styles.stack}>
       <ResultsPanel output={output} presentation={presentation} pending={pending} />
-      <SaveToSite draft={draft} system={system} calculable={output.kind !== 'invalid'} caseLink={caseLink} />
+      <SaveToSite draft={draft} system={system} calculable={output.kind !== 'invalid'} />
       {output.kind === 'ok' ? <ChartsPanel draft={draft} output={output} system={system} wide={large} /> : null}
       <MethodPanel result={output.kind === 'ok' ? output.result : null} warnings={presentation?.warnings} />
     </View>

@@ -1,10 +1,11 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { render, screen, waitFor } from '@testing-library/react';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 
 import { revisionKeys, type Readiness } from '../../api/revisions';
 import { sessionKeys } from '../../api/session';
 import type { Role } from '../../api/types';
+import { jsonAnswer as answer, press, requestsTo as calls, sessionOf, type } from '../common/testing';
 
 import { PrepareRevisionScreen } from './prepare-revision-screen';
 import { RevisionSchemePanel, schemeInput, schemeWords } from './revision-scheme-panel';
@@ -18,36 +19,20 @@ jest.mock('expo-router', () => ({
   ),
 }));
 
-const answer = (status: number, body: unknown) =>
-  Promise.resolve({ ok: status < 300, status, headers: { get: () => null }, text: async () => JSON.stringify(body) } as unknown as Response);
-
 type Route = (url: string, init: RequestInit) => Promise<Response> | undefined;
 
 function setup(ui: React.ReactElement, route: Route, role: Role = 'engineer') {
   const fetchMock = jest.fn((url: string, init: RequestInit = {}) => route(url, init) ?? answer(404, { errors: [{ code: 'NOT_FOUND', message: `No route ${url}` }] }));
   globalThis.fetch = fetchMock as unknown as typeof fetch;
   const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  client.setQueryData(sessionKeys.current(), { user: { id: 1, name: 'Eng', email: 'e@x.test' }, team: { id: 1, name: 'T' }, role, settings: { unitSystem: 'SI' }, csrfToken: 't' });
+  client.setQueryData(sessionKeys.current(), sessionOf(role));
   render(
     <SafeAreaProvider initialMetrics={{ frame: { x: 0, y: 0, width: 390, height: 844 }, insets: { top: 0, left: 0, right: 0, bottom: 0 } }}>
       <QueryClientProvider client={client}>{ui}</QueryClientProvider>
     </SafeAreaProvider>,
   );
-  const press = async (el: HTMLElement) => {
-    await act(async () => {
-      fireEvent.click(el);
-    });
-  };
-  const type = async (testId: string, value: string) => {
-    await act(async () => {
-      fireEvent.change(screen.getByTestId(testId), { target: { value } });
-    });
-  };
-  return { fetchMock, client, press, type };
+  return { fetchMock, client };
 }
-
-const calls = (fetchMock: jest.Mock, method: string, path: string) =>
-  fetchMock.mock.calls.filter(([url, init]) => ((init as RequestInit | undefined)?.method ?? 'GET') === method && String(url) === `/api/v1${path}`);
 
 describe('the numbering scheme', () => {
   const realFetch = globalThis.fetch;
@@ -64,7 +49,7 @@ describe('the numbering scheme', () => {
 
   it('when an engineer switches to the team’s own counter, then a bad field is refused at the field, the preview follows, and the PUT carries the scheme', async () => {
     let saved: unknown = { kind: 'trade' };
-    const { fetchMock, press, type } = setup(<RevisionSchemePanel siteId="3" nextNumbers={{ review: 'B', construction: '0' }} />, (url, init) => {
+    const { fetchMock } = setup(<RevisionSchemePanel siteId="3" nextNumbers={{ review: 'B', construction: '0' }} />, (url, init) => {
       if (url !== '/api/v1/sites/3/revision-scheme') return undefined;
       if (init.method === 'PUT') {
         saved = JSON.parse(String(init.body));
@@ -94,7 +79,7 @@ describe('the numbering scheme', () => {
   });
 
   it('when the server refuses a field, then its message sits at that field', async () => {
-    const { press, type } = setup(<RevisionSchemePanel siteId="3" />, (url, init) => {
+    setup(<RevisionSchemePanel siteId="3" />, (url, init) => {
       if (url !== '/api/v1/sites/3/revision-scheme') return undefined;
       if (init.method === 'PUT') return answer(400, { errors: [{ code: 'VALIDATION_FAILED', message: 'Prefix is in use by another site’s series', field: 'prefix' }] });
       return answer(200, { scheme: { kind: 'counter', prefix: 'P-', start: 1, digits: 2 } });
@@ -140,7 +125,7 @@ describe('"Size all" on the prepare screen', () => {
   it('when stale and unsized items block the revision, then "Size all" starts the site’s job, shows its progress, and the blockers are asked for again when it is done', async () => {
     let sized = false;
     let polls = 0;
-    const { fetchMock, client, press } = setup(<PrepareRevisionScreen siteId="1" />, (url, init) => {
+    const { fetchMock, client } = setup(<PrepareRevisionScreen siteId="1" />, (url, init) => {
       if (url === '/api/v1/sites/1') return answer(200, { site: { id: 1, name: 'Boiler house', designBases: {} } });
       if (url === '/api/v1/sites/1/revisions/readiness') return answer(200, { readiness: readiness(!sized) });
       if (url === '/api/v1/sites/1/sizing' && init.method === 'POST') return answer(202, { job: { id: 5, siteId: 1, status: 'running', done: 0, total: 2, error: null } });

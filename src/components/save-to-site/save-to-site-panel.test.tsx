@@ -1,12 +1,13 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { act, fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { render, screen, waitFor } from '@testing-library/react';
 
 import { FINISHES, INSULATION_MATERIALS } from '../../../shared/calc/library';
 import { libraryKeys } from '../../api/library';
 import { sessionKeys } from '../../api/session';
 import { siteKeys } from '../../api/sites';
-import type { LibraryPayload, Role, SessionPayload } from '../../api/types';
+import type { LibraryPayload, Role } from '../../api/types';
 import { defaultDraft, type Draft } from '../../calc/quick-case';
+import { jsonAnswer as answer, pick, press, sessionOf, type } from '../common/testing';
 
 import { SaveToSite } from './save-to-site-panel';
 
@@ -18,9 +19,6 @@ jest.mock('expo-router', () => ({
   ),
 }));
 
-const answer = (status: number, body: unknown) =>
-  Promise.resolve({ ok: status < 300, status, headers: { get: () => null }, text: async () => JSON.stringify(body) } as unknown as Response);
-
 const library: LibraryPayload = {
   materials: INSULATION_MATERIALS.map((m) => ({ ...m, origin: 'builtIn' })) as unknown as LibraryPayload['materials'],
   finishes: FINISHES.map((f) => ({ ...f, origin: 'builtIn' })) as unknown as LibraryPayload['finishes'],
@@ -30,17 +28,11 @@ const library: LibraryPayload = {
   teamFinishes: [],
 };
 
-function session(role: Role | null): SessionPayload {
-  return role
-    ? { user: { id: 1, name: 'Eng', email: 'e@x.test' }, team: { id: 1, name: 'T' }, role, settings: { unitSystem: 'SI' }, csrfToken: 't' }
-    : { user: null, team: null, role: null, settings: null, csrfToken: 't' };
-}
-
 function setup(opts: { role?: Role | null; draft?: Partial<Draft>; fetchMock?: jest.Mock } = {}) {
   const fetchMock = opts.fetchMock ?? jest.fn(() => answer(500, {}));
   globalThis.fetch = fetchMock as unknown as typeof fetch;
   const client = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } } });
-  client.setQueryData(sessionKeys.current(), session(opts.role === undefined ? 'engineer' : opts.role));
+  client.setQueryData(sessionKeys.current(), sessionOf(opts.role === undefined ? 'engineer' : opts.role));
   client.setQueryData(siteKeys.list(), [
     { id: 4, name: 'Boiler house' },
     { id: 5, name: 'Tank farm' },
@@ -49,26 +41,14 @@ function setup(opts: { role?: Role | null; draft?: Partial<Draft>; fetchMock?: j
   const draft = { ...defaultDraft(), ...opts.draft };
   render(
     <QueryClientProvider client={client}>
-      <SaveToSite draft={draft} system="SI" calculable caseLink="/quick-sizing?c=abc" />
+      <SaveToSite draft={draft} system="SI" calculable />
     </QueryClientProvider>,
   );
-  const press = async (el: HTMLElement) => {
-    await act(async () => {
-      fireEvent.click(el);
-    });
-  };
-  const type = async (testId: string, value: string) => {
-    await act(async () => {
-      fireEvent.change(screen.getByTestId(testId), { target: { value } });
-    });
-  };
-  const pick = async (testId: string, value: string) => {
-    await press(screen.getByTestId(testId));
-    await press(screen.getByTestId(`${testId}-option-${value}`));
-  };
-  return { fetchMock, press, type, pick };
+  return { fetchMock };
 }
 
+
+/** Every request that would write, whatever its path. */
 const posts = (fetchMock: jest.Mock) => fetchMock.mock.calls.filter((c) => (c[1] as RequestInit | undefined)?.method === 'POST');
 
 describe('SaveToSite', () => {
@@ -100,7 +80,7 @@ describe('SaveToSite', () => {
       .fn()
       .mockImplementationOnce(() => answer(409, { errors: [{ code: 'TAG_TAKEN', message: 'The site already has a line tagged "QS-1".', field: 'tag' }] }))
       .mockImplementationOnce(() => answer(201, { line: { id: 77, tag: 'QS-2', siteId: 4 } }));
-    const { press, type, pick } = setup({ fetchMock });
+    setup({ fetchMock });
     await press(screen.getByTestId('qs-save-to-site'));
     expect(screen.getByTestId('qs-save-indoor').textContent).toMatch(/indoor/);
     expect(screen.getByTestId('qs-save-summary').textContent).toMatch(/Line NPS 4, horizontal/);
@@ -129,7 +109,7 @@ describe('SaveToSite', () => {
       location: 'indoor',
       purposes: ['personnelProtection'],
       buildUp: { layers: [{ materialId: 'mineral-fibre-pipe-c547-type-i' }], finishId: 'aluminium-oxidised' },
-      notes: 'Saved from quick sizing: /quick-sizing?c=abc',
+      notes: 'Saved from quick sizing.',
     });
 
     await type('qs-save-tag', 'QS-2');
@@ -143,7 +123,7 @@ describe('SaveToSite', () => {
   it('when a layer has a custom k(T) and the case has wind, then saving waits for a stand-in material and a location', async () => {
     const calsil = INSULATION_MATERIALS.find((m) => m.id === 'calcium-silicate-c533-type-i')!;
     const fetchMock = jest.fn(() => answer(201, { line: { id: 8, tag: 'QS-3', siteId: 5 } }));
-    const { press, type, pick } = setup({
+    setup({
       fetchMock,
       draft: { windSpeedMS: 3, processTemperatureC: 300, layers: [{ materialId: 'custom', conductivity: [...calsil.conductivity], maxServiceTemperatureC: 500, thicknessM: 0.05 }] },
     });

@@ -38,9 +38,10 @@ export interface SaveToSiteProps {
   system: UnitSystem;
   /** Every input of the case holds a usable value (nothing marked): only then can it be saved. */
   calculable: boolean;
-  /** The quick-sizing link of the case, kept in the new item's notes. */
-  caseLink?: string;
 }
+
+/** Kept in the new item's notes, so whoever reads the line list knows where it came from. */
+const SAVED_NOTE = 'Saved from quick sizing.';
 
 type Saved = { kind: 'line' | 'vessel'; id: number; tag: string; siteId: string; siteName: string };
 
@@ -67,7 +68,7 @@ function lengthOf(text: string, system: UnitSystem): { lengthM: number | null; p
   return { lengthM: Number(fromDisplay('length', system, n).toPrecision(12)) };
 }
 
-function choicesOf(v: Values, system: UnitSystem, caseLink?: string): SaveChoices {
+function choicesOf(v: Values, system: UnitSystem): SaveChoices {
   const materialFor: Record<number, string> = {};
   for (const [i, id] of Object.entries(v.materials)) if (id) materialFor[Number(i)] = id;
   return {
@@ -77,7 +78,7 @@ function choicesOf(v: Values, system: UnitSystem, caseLink?: string): SaveChoice
     location: v.location || null,
     materialFor,
     finishFor: v.finish || null,
-    notes: caseLink ? `Saved from quick sizing: ${caseLink}` : undefined,
+    notes: SAVED_NOTE,
   };
 }
 
@@ -101,7 +102,7 @@ function errorsOf(m: SaveMapping, v: Values, system: UnitSystem): FormErrors {
  * "Save to a site" on the quick-sizing screen: a signed-in owner or engineer saves the case as a line or vessel
  * of one of the team's sites. Everyone else sees why it is not offered to them.
  */
-export function SaveToSite({ draft, system, calculable, caseLink }: SaveToSiteProps) {
+export function SaveToSite({ draft, system, calculable }: SaveToSiteProps) {
   const session = useSession();
   const [open, setOpen] = useState(false);
   const [saved, setSaved] = useState<Saved | null>(null);
@@ -149,7 +150,6 @@ export function SaveToSite({ draft, system, calculable, caseLink }: SaveToSitePr
       system={system}
       itemKind={kind.itemKind}
       calculable={calculable}
-      caseLink={caseLink}
       onSaved={(s) => {
         setOpen(false);
         setSaved(s);
@@ -164,13 +164,12 @@ interface SaveFormProps {
   system: UnitSystem;
   itemKind: 'line' | 'vessel';
   calculable: boolean;
-  caseLink?: string;
   onSaved: (s: Saved) => void;
   onCancel: () => void;
 }
 
 function SaveForm(props: SaveFormProps) {
-  const { draft, system, itemKind, caseLink, onSaved } = props;
+  const { draft, system, itemKind, onSaved } = props;
   const sites = useSites();
   const library = useLibrary();
   const create = useCreateItemInSite();
@@ -205,7 +204,7 @@ function SaveForm(props: SaveFormProps) {
   const initial: Values = { siteId: list.length === 1 ? String(list[0].id) : '', tag: '', service: '', length: '', location: '', materials: {}, finish: '' };
   const onSubmit = async (values: Values, helpers: FormikHelpers<Values>) => {
     helpers.setStatus(undefined);
-    const m = saveToSiteBody(draft, choicesOf(values, system, caseLink));
+    const m = saveToSiteBody(draft, choicesOf(values, system));
     if (!m.body || !values.siteId) return;
     const result = await create.mutateAsync({ siteId: values.siteId, kind: itemKind, input: m.body as unknown as Record<string, unknown> });
     if (result.kind === 'ok') {
@@ -232,7 +231,7 @@ function SaveForm(props: SaveFormProps) {
   return (
     <Formik<Values>
       initialValues={initial}
-      validate={(v) => errorsOf(saveToSiteBody(draft, choicesOf(v, system, caseLink)), v, system) as never}
+      validate={(v) => errorsOf(saveToSiteBody(draft, choicesOf(v, system)), v, system) as never}
       onSubmit={onSubmit}
     >
       {(form) => <SaveFormBody {...props} form={form} sites={list} lib={library.data} words={words} />}
@@ -245,7 +244,6 @@ function SaveFormBody({
   system,
   itemKind,
   calculable,
-  caseLink,
   onCancel,
   form,
   sites,
@@ -256,7 +254,7 @@ function SaveFormBody({
   const shown = form.submitCount > 0;
   const errors = form.errors as FormErrors;
   const err = (name: string) => (shown ? errors[name] : undefined);
-  const mapping = useMemo(() => saveToSiteBody(draft, choicesOf(v, system, caseLink)), [draft, v, system, caseLink]);
+  const mapping = useMemo(() => saveToSiteBody(draft, choicesOf(v, system)), [draft, v, system]);
   // Problems of the case itself are shown at once: nothing typed here fixes them.
   const caseProblems = mapping.problems.filter((p) => saveFieldOf(p.field) === 'case').map((p) => p.message);
   const materials = useMemo(() => materialOptions(lib, system), [lib, system]);
@@ -264,8 +262,8 @@ function SaveFormBody({
   const still = draft.windSpeedMS === null || draft.windSpeedMS === 0;
   const lengthUnit = unitOf('length', system);
   const holding = itemKind === 'line' && draft.purpose === 'holding';
-  const layers = (mapping.body?.buildUp?.layers ?? draft.layers.map((l, i) => ({ materialId: l.materialId === 'custom' ? v.materials[String(i)] || 'custom' : l.materialId })));
-  const layerWords = layers.map((l) => (l.materialId === 'custom' ? 'custom material' : libraryName(lib, l.materialId))).join(' + ');
+  const layers = mapping.proposed.buildUp?.layers ?? [];
+  const layerWords = layers.map((l) => (l.materialId ? libraryName(lib, l.materialId) : 'custom material')).join(' + ');
   const finishWord = draft.finishId === 'custom' ? (v.finish ? libraryName(lib, v.finish) : 'custom finish') : libraryName(lib, draft.finishId);
 
   return (
@@ -391,6 +389,11 @@ function SaveFormBody({
       {!calculable ? (
         <Text tone="fail" weight="semibold" testID="qs-save-not-calculable">
           Fix the marked inputs of the case first: a case with missing or unusable values cannot be saved.
+        </Text>
+      ) : null}
+      {shown && Object.keys(errors).some((k) => k !== 'case' && errors[k]) ? (
+        <Text tone="fail" weight="semibold" role="alert" testID="qs-save-marked">
+          Not saved: the marked fields above say what is needed.
         </Text>
       ) : null}
       <View style={styles.actions}>

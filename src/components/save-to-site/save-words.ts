@@ -34,7 +34,7 @@ export function leftBehindWords(l: LeftBehind, system: UnitSystem): string {
 /** The purpose as the line list will size it, with the limit that goes with it. */
 export function purposeWords(m: SaveMapping, d: Draft, system: UnitSystem): string {
   const name = PURPOSE_LABELS[m.purpose].label;
-  const params = (m.body?.purposeParameters ?? {}) as Record<string, Record<string, number> | undefined>;
+  const params = (m.proposed.purposeParameters ?? {}) as Record<string, Record<string, number> | undefined>;
   switch (m.purpose) {
     case 'heatConservation': {
       const p = params.heatConservation;

@@ -52,13 +52,10 @@ export function TextField({
       <Text variant="label" nativeID={`${id}-label`} aria-hidden>
         {visibleLabel}
       </Text>
-      <View
-        style={[
-          styles.box,
-          error ? styles.boxError : null,
-          focused ? styles.boxFocused : null,
-        ]}
-      >
+      <View style={[styles.box, focused ? styles.boxFocused : null]}>
+        {/* The border is drawn over the input rather than around it, so the input itself fills the whole
+            44 px box a thumb taps (WCAG 2.5.5) while the field keeps the look of the other fields. */}
+        <View style={[styles.frame, error ? styles.frameError : null, focused ? styles.frameFocused : null]} />
         <TextInput
           {...rest}
           testID={testID}
@@ -122,15 +119,22 @@ export const fieldBox: ViewStyle = {
   backgroundColor: colors.surface,
 };
 
+/** The smallest touch target of an input [px] (WCAG 2.5.5; the platforms' 44 pt guidance). */
+export const MIN_TOUCH_PX = 44;
+
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
-  box: fieldBox,
-  boxFocused: { borderColor: colors.focus, ...focusRing, outlineOffset: 0 } as never,
-  boxError: { borderColor: colors.fail, borderWidth: 2 },
+  box: { ...fieldBox, borderWidth: 0, alignItems: 'stretch', minHeight: MIN_TOUCH_PX },
+  boxFocused: { ...focusRing, outlineOffset: 0 } as never,
+  frame: { position: 'absolute', top: 0, right: 0, bottom: 0, left: 0, pointerEvents: 'none', borderWidth: 1, borderColor: colors.borderStrong, borderRadius: radius.md },
+  frameFocused: { borderColor: colors.focus },
+  frameError: { borderColor: colors.fail, borderWidth: 2 },
   input: {
     flex: 1,
     minWidth: 0,
-    paddingHorizontal: spacing.md,
+    minHeight: MIN_TOUCH_PX,
+    // One pixel more than the padding of a bordered field, so the text sits where it does in the others.
+    paddingHorizontal: spacing.md + 1,
     paddingVertical: spacing.sm,
     fontFamily: fonts.regular,
     fontSize: fontSizes.body,
@@ -140,6 +144,6 @@ const styles = StyleSheet.create({
     ...tabularFigures,
   } as never,
   inputWithUnit: { textAlign: 'right' },
-  unit: { paddingRight: spacing.md },
-  reveal: { paddingHorizontal: spacing.md, paddingVertical: spacing.sm, borderRadius: radius.sm },
+  unit: { paddingRight: spacing.md + 1, alignSelf: 'center' },
+  reveal: { paddingHorizontal: spacing.md, paddingVertical: spacing.sm, borderRadius: radius.sm, alignSelf: 'center', minHeight: MIN_TOUCH_PX, justifyContent: 'center' },
 });
