@@ -1,7 +1,8 @@
 /**
  * Quick sizing → a site's line list, in Chromium, on the seeded demo as the demo engineer: size a pipe in quick
  * sizing for heat conservation, save it to the boiler house as a new line (a tag already in use is refused at
- * the tag), find it in the line list, see its inputs as saved, size the site, and see the same purpose govern.
+ * the tag), find it in the line list, see its inputs as saved, size the site (on a wide screen from the
+ * prepare-revision screen, where the new line blocks the revision until then), and see the same purpose govern.
  * Once on a phone (390×844), given by NPS in still air, and once on a wide screen (1440×900), given by DN with
  * wind (so the location is asked), each against its own fresh demo. Along the way: every text input is at least
  * the 44 px a thumb needs on a phone, and the field keeps its 44 px look on a wide screen.
@@ -167,10 +168,24 @@ describe.each([
     expect(inputs).toContain('60.0 W/m');
     expect(inputs).toContain('Saved from quick sizing.');
 
-    // Size the site: the same purpose governs the saved line, as the server stored it.
-    await page.getByTestId('size-all').click();
-    await page.getByTestId('sizing-done').waitFor({ timeout: 180_000 });
-    await page.getByTestId('item-unsized').waitFor({ state: 'detached' });
+    // Size the site: from the line's page on a phone; on a wide screen from the prepare-revision screen, where the
+    // new line blocks the next revision until it is sized.
+    if (phone) {
+      await page.getByTestId('size-all').click();
+      await page.getByTestId('sizing-done').waitFor({ timeout: 180_000 });
+    } else {
+      await gotoApp(page, `${server.url}/sites/${site.id}/revisions/prepare`);
+      await page.getByTestId(`blocker-${newTag}`).waitFor();
+      await expect(page.getByTestId(`blocker-${newTag}`).innerText()).resolves.toContain('Not sized');
+      await screenshot(page, `save-to-site-${tag}-05b-prepare-blocked`);
+      await page.getByTestId('prepare-blocked').getByTestId('size-all').click();
+      await page.getByTestId('sizing-done').waitFor({ timeout: 180_000 });
+      await page.getByTestId('prepare-blocked').waitFor({ state: 'detached' });
+      await screenshot(page, `save-to-site-${tag}-05c-prepare-sized`);
+      await gotoApp(page, `${server.url}/lines/${stored.id}`);
+    }
+    await page.getByTestId('item-governing').waitFor();
+    await expect(page.getByTestId('item-unsized').count()).resolves.toBe(0);
     await expect(page.getByTestId('item-governing').innerText()).resolves.toContain('Heat conservation governs');
     const result = (await server.db('item_results').where({ item_id: stored.id }).first('governing_purpose', 'total_thickness_m')) as { governing_purpose: string; total_thickness_m: number };
     expect(result.governing_purpose).toBe('heatConservation');
